@@ -1,0 +1,36 @@
+import 'reflect-metadata';
+import * as SQLite from 'expo-sqlite';
+import { DataSource } from 'typeorm';
+import { LocalLibraryEntry } from './entities/LocalLibraryEntry';
+import { LocalSetting } from './entities/LocalSetting';
+import { LocalInit1733000000000 } from './migrations/1733000000000-LocalInit';
+
+/** Every local entity; add new ones here and a migration beside them. */
+export const LOCAL_ENTITIES = [LocalLibraryEntry, LocalSetting];
+export const LOCAL_MIGRATIONS = [LocalInit1733000000000];
+
+let ready: Promise<DataSource> | null = null;
+
+/**
+ * The device database (expo-sqlite's async API through TypeORM's expo driver). On the web it
+ * lives in the browser's private file system and survives reloads and going offline.
+ */
+export function getLocalDb(): Promise<DataSource> {
+  if (!ready) {
+    const ds = new DataSource({
+      type: 'expo',
+      database: 'tessera.db',
+      driver: SQLite,
+      entities: LOCAL_ENTITIES,
+      migrations: LOCAL_MIGRATIONS,
+      migrationsRun: true,
+      synchronize: false,
+      logging: false,
+    });
+    ready = ds.initialize().catch((err: unknown) => {
+      ready = null;
+      throw err;
+    });
+  }
+  return ready;
+}
