@@ -95,7 +95,7 @@ const originOf = (s: string, variable: string): string => {
  * In development a JWT secret is generated once and kept beside the database so sessions survive
  * restarts without anyone having to set one.
  */
-export function loadConfig(env: NodeJS.ProcessEnv, root: string): Config {
+export function loadConfig(env: Record<string, string | undefined>, root: string): Config {
   const relevant = Object.fromEntries(
     Object.keys(EnvSchema.shape).flatMap((k) => (env[k] === undefined || env[k] === '' ? [] : [[k, env[k]]])),
   );
