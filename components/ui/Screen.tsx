@@ -24,7 +24,7 @@ export function Screen({ title, subtitle, children, scroll = true }: ScreenProps
   if (!scroll) {
     return (
       <View style={[styles.fill, { backgroundColor: t.colours.background }]}>
-        {head}
+        <View style={styles.headPadded}>{head}</View>
         <View style={styles.fillBody}>{children}</View>
       </View>
     );
@@ -41,7 +41,8 @@ const styles = StyleSheet.create({
   fill: { flex: 1, width: '100%' },
   fillBody: { flex: 1, paddingHorizontal: 16, paddingBottom: 16, minHeight: 0 },
   body: { paddingHorizontal: 16, paddingBottom: 24, gap: 12, maxWidth: 1200, width: '100%', alignSelf: 'center' },
-  head: { paddingTop: 20, paddingBottom: 8, paddingHorizontal: 0, gap: 2 },
+  head: { paddingTop: 20, paddingBottom: 8, gap: 2 },
+  headPadded: { paddingHorizontal: 16 },
   title: { fontSize: 26 },
   subtitle: { fontSize: 14 },
 });
