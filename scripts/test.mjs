@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // `npm test`: every check the project has, in order, then ONE summary line "N passed, N failed".
-//   1. type check (tsc --noEmit)            — counts as one check
+//   1. type check (tsc --noEmit) and lint    — one check each
 //   2. vitest: unit + server projects        — every test counts
 //   3. server build and web export           — one check each
 //   4. vitest: e2e project (headless Chromium) — every test counts
@@ -77,6 +77,7 @@ const haveChromium = ensureChromium();
 if (!haveChromium) process.exit(1);
 
 check('type check', run('type check (tsc --noEmit)', 'npx', ['tsc', '--noEmit', '-p', 'tsconfig.json']));
+check('lint', run('lint (eslint)', 'npx', ['eslint', '.', '--max-warnings=200']));
 vitest('unit and server suites', ['unit', 'server'], 'vitest-unit-server.json');
 const serverBuilt = run('server build (tsc -p tsconfig.server.json)', 'npx', ['tsc', '-p', 'tsconfig.server.json']);
 check('server build', serverBuilt);
