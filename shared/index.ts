@@ -8,3 +8,6 @@ export * from './api/auth';
 export * from './api/library';
 export * from './api/error';
 export * from './caution';
+export * from './inputIssue';
+export * from './screening';
+export * from './analysis';

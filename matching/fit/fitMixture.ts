@@ -1,0 +1,304 @@
+import { FitOptionsSchema, type FitComponent, type FitOptions, type FitResult, type RejectedCandidate, type UnexplainedPeak } from '../../shared/analysis';
+import type { LibraryEntry } from '../../shared/libraryEntry';
+import type { Mixture } from '../../shared/mixture';
+import { DEFAULT_TOLERANCE_PPM } from '../../shared/nucleus';
+import { mixtureEstimateLinewidth } from '../lineshape/mixtureEstimateLinewidth';
+import { nucleusFrequency } from '../lineshape/nucleusFrequency';
+import { entryToLines, type EntryLine } from '../multiplets/entryToLines';
+import { fitDesignPeaks } from './fitDesignPeaks';
+import { fitDesignSpectrum } from './fitDesignSpectrum';
+import { fitEvidence } from './fitEvidence';
+import { fitNormalEquations } from './fitNormalEquations';
+import { fitSearchOffsets } from './fitSearchOffsets';
+import { shiftLines, type FitDesign, type FitLine } from './fitTypes';
+import { intensityNoiseLevel } from './intensityNoiseLevel';
+import { nnlsSolve } from './nnlsSolve';
+import { spdSolve } from './spdSolve';
+
+/** Quantitation limit S/N = 10 (ICH Q2(R1), signal-to-noise approach; common practice). */
+export const QUANTITATION_SNR = 10;
+/** Detection limit S/N = 3 (ICH Q2(R1), signal-to-noise approach; common practice). */
+export const DETECTION_SNR = 3;
+
+/** Height of the tallest single line per unit amount: a unit-area Lorentzian peaks at 2/(π·Γ). */
+function tallest(lines: FitLine[]): number {
+  let h = 0;
+  for (const l of lines) h = Math.max(h, (2 * l.a) / (Math.PI * l.w));
+  return h;
+}
+
+interface Prepared {
+  axis: Float64Array;
+  y: Float64Array;
+  reversed: boolean;
+}
+
+function prepareSpectrum(ppm: number[], intensity: number[]): Prepared {
+  const n = ppm.length;
+  if (n !== intensity.length) throw new RangeError(`mixture ppm has ${n} points but intensity has ${intensity.length}`);
+  const reversed = n > 1 && ppm[n - 1] < ppm[0];
+  const axis = Float64Array.from(reversed ? [...ppm].reverse() : ppm);
+  const y = Float64Array.from(reversed ? [...intensity].reverse() : intensity);
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(axis[i]) || !Number.isFinite(y[i])) throw new RangeError(`mixture point ${reversed ? n - 1 - i : i} is not a finite number`);
+    if (i > 0 && !(axis[i] > axis[i - 1])) throw new RangeError(`mixture ppm axis must be strictly monotonic (at point ${reversed ? n - 1 - i : i})`);
+  }
+  return { axis, y, reversed };
+}
+
+function maybeReverse(a: Float64Array, reversed: boolean): number[] {
+  const out = Array.from(a);
+  return reversed ? out.reverse() : out;
+}
+
+/**
+ * Confirms candidates by fitting the mixture as a non-negative combination of their simulated
+ * Lorentzian spectra (NNLS, Lawson & Hanson 1974), each candidate shifted by one common offset
+ * inside ±tolerance. Works on a spectrum (sparse columns on the grid) and on a peak list (closed
+ * form Lorentzian overlaps, no grid). Amounts are per nucleus, so they compare as mole ratios.
+ */
+export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options: FitOptions = {}): FitResult {
+  const parsed = FitOptionsSchema.safeParse(options);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    throw new RangeError(`fit option ${issue.path.join('.') || '(root)'}: ${issue.message}`);
+  }
+  const nucleus = mixture.nucleus;
+  const {
+    tolerancePpm = DEFAULT_TOLERANCE_PPM[nucleus],
+    refineShifts = true,
+    minShare = 0.005,
+    cutoff = 1e-7,
+    unexplainedFraction = 0.5,
+  } = parsed.data;
+  const freq = nucleusFrequency(nucleus, mixture.mhz);
+  const estimate = parsed.data.linewidthHz === undefined ? mixtureEstimateLinewidth(mixture) : null;
+  let linewidthHz = parsed.data.linewidthHz ?? estimate!.widthHz;
+  const linewidthSource = parsed.data.linewidthHz !== undefined ? 'option' : estimate!.source;
+
+  const rejected: RejectedCandidate[] = [];
+  const kept: { entry: LibraryEntry; raw: EntryLine[]; nuclei: number }[] = [];
+  const seen = new Set<string>();
+  for (const entry of candidates) {
+    if (seen.has(entry.id)) throw new RangeError(`candidate "${entry.id}" is listed twice`);
+    seen.add(entry.id);
+    const raw = entryToLines(entry, nucleus, mixture.mhz);
+    if (raw.length === 0) {
+      rejected.push({ entryId: entry.id, name: entry.name, reason: 'no-lines', message: `no ${nucleus} signals to simulate`, share: 0 });
+      continue;
+    }
+    kept.push({ entry, raw, nuclei: raw.reduce((s, l) => s + l.area, 0) });
+  }
+  // Lines at a given mixture linewidth; a line the entry marks broader keeps its own width.
+  const linesAt = (widthHz: number): FitLine[][] =>
+    kept.map((k) => k.raw.map((l) => ({ x: l.shift, a: l.area, w: Math.max(l.widthHz ?? widthHz, widthHz) / freq })));
+  const signalsOf = (lines: FitLine[][]): FitLine[][][] =>
+    kept.map((k, i) => {
+      const bySignal = new Map<number, FitLine[]>();
+      k.raw.forEach((l, p) => bySignal.set(l.signal, [...(bySignal.get(l.signal) ?? []), lines[i][p]]));
+      return [...bySignal.values()];
+    });
+
+  let design: FitDesign;
+  let prepared: Prepared | null = null;
+  let noise: number | null = parsed.data.noiseLevel ?? null;
+  if (mixture.kind === 'spectrum') {
+    prepared = prepareSpectrum(mixture.ppm, mixture.intensity);
+    design = fitDesignSpectrum(prepared.axis, prepared.y, cutoff);
+    if (noise === null) noise = intensityNoiseLevel(prepared.y);
+  } else {
+    const peaks = mixture.peaks.map((p, i) => {
+      if (!Number.isFinite(p.shift) || !Number.isFinite(p.intensity) || p.intensity < 0) throw new RangeError(`mixture peak ${i + 1} needs a finite shift and a non-negative intensity`);
+      const w = (p.widthHz ?? linewidthHz) / freq;
+      // A height H of a Lorentzian of width Γ carries the area π·H·Γ/2.
+      const a = mixture.intensityKind === 'integral' ? p.intensity : (Math.PI * p.intensity * w) / 2;
+      return { x: p.shift, a, w };
+    });
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const k of kept) for (const l of k.raw) { lo = Math.min(lo, l.shift); hi = Math.max(hi, l.shift); }
+    if (!Number.isFinite(lo)) { lo = 0; hi = 0; }
+    design = fitDesignPeaks(peaks, [lo - tolerancePpm, hi + tolerancePpm], tolerancePpm);
+  }
+
+  let active = kept.map((_, i) => i);
+  let offsets = new Array<number>(kept.length).fill(0);
+  let base = linesAt(linewidthHz);
+  let current = base;
+  const search = (rounds: number) => {
+    if (!refineShifts || tolerancePpm <= 0 || kept.length === 0) return;
+    const minW = Math.min(...base.flatMap((k) => k.map((l) => l.w)));
+    const gridStep = prepared ? (prepared.axis[prepared.axis.length - 1] - prepared.axis[0]) / (prepared.axis.length - 1) : 0;
+    const step = Math.max(minW / 4, gridStep / 2, tolerancePpm / 400);
+    const found = fitSearchOffsets(design, base, tolerancePpm, step, rounds);
+    offsets = found.offsets;
+    current = found.lines;
+  };
+  search(3);
+  // A spectrum without a stated linewidth: refine the common width by golden-section search of
+  // the residual (offsets held), between half and twice the estimate, then re-search offsets.
+  if (mixture.kind === 'spectrum' && parsed.data.linewidthHz === undefined && kept.length > 0) {
+    const sseAt = (widthHz: number) => {
+      const lines = linesAt(widthHz).map((l, i) => shiftLines(l, offsets[i]));
+      const ne = fitNormalEquations(design, lines);
+      const x = nnlsSolve(ne.G, ne.h).x;
+      let v = design.yy;
+      for (let a = 0; a < x.length; a++) {
+        v -= 2 * ne.h[a] * x[a];
+        for (let b = 0; b < x.length; b++) v += x[a] * ne.G[a][b] * x[b];
+      }
+      return v;
+    };
+    const phi = (Math.sqrt(5) - 1) / 2;
+    let lo = Math.log(linewidthHz / 2);
+    let hi = Math.log(linewidthHz * 2);
+    let p = hi - phi * (hi - lo);
+    let q = lo + phi * (hi - lo);
+    let fp = sseAt(Math.exp(p));
+    let fq = sseAt(Math.exp(q));
+    for (let it = 0; it < 14; it++) {
+      if (fp < fq) { hi = q; q = p; fq = fp; p = hi - phi * (hi - lo); fp = sseAt(Math.exp(p)); }
+      else { lo = p; p = q; fp = fq; q = lo + phi * (hi - lo); fq = sseAt(Math.exp(q)); }
+    }
+    linewidthHz = Math.exp((lo + hi) / 2);
+    base = linesAt(linewidthHz);
+    current = base.map((l, i) => shiftLines(l, offsets[i]));
+    search(2);
+  }
+
+  // Solve, reject zero or negligible candidates, and solve again without them.
+  let c: Float64Array = new Float64Array(0);
+  let G: Float64Array[] = [];
+  let h: Float64Array = new Float64Array(0);
+  for (let pass = 0; pass < 5; pass++) {
+    ({ G, h } = fitNormalEquations(design, active.map((i) => current[i])));
+    c = nnlsSolve(G, h).x;
+    const drop: number[] = [];
+    const explained = active.reduce((sum, i, a) => sum + c[a] * design.modelIntensity(current[i]), 0);
+    const total = Math.max(design.totalIntensity, explained);
+    active.forEach((i, a) => {
+      const share = total > 0 ? Math.min(1, (c[a] * design.modelIntensity(current[i])) / total) : 0;
+      const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
+      const { entry } = kept[i];
+      const reject = (reason: RejectedCandidate['reason'], message: string) => {
+        rejected.push({ entryId: entry.id, name: entry.name, reason, message, share });
+        drop.push(i);
+      };
+      if (!(c[a] > 0)) reject('zero-amount', 'the fit drove its amount to zero');
+      else if (share < minShare) {
+        reject('below-share', `explains ${(share * 100).toPrecision(2)} % of the mixture intensity, below the ${(minShare * 100).toPrecision(2)} % threshold`);
+      } else if (snr !== null && snr < DETECTION_SNR) {
+        reject('below-detection', `its tallest fitted line has S/N ${snr.toFixed(1)}, below the detection limit ${DETECTION_SNR}`);
+      }
+    });
+    if (drop.length === 0) break;
+    active = active.filter((i) => !drop.includes(i));
+  }
+
+  const n = design.axis.length;
+  const fitted = new Float64Array(n);
+  const curves = active.map((i, a) => {
+    const curve = design.curve(current[i]);
+    for (let p = 0; p < n; p++) {
+      curve[p] *= c[a];
+      fitted[p] += curve[p];
+    }
+    return curve;
+  });
+  const residual = new Float64Array(n);
+  let sseGrid = 0;
+  for (let p = 0; p < n; p++) {
+    residual[p] = design.mixtureCurve[p] - fitted[p];
+    sseGrid += residual[p] * residual[p];
+  }
+  let sse = design.yy;
+  for (let a = 0; a < c.length; a++) {
+    sse -= 2 * h[a] * c[a];
+    for (let b = 0; b < c.length; b++) sse += c[a] * G[a][b] * c[b];
+  }
+  if (design.kind === 'spectrum') sse = sseGrid;
+  const rSquared = design.yy > 0 ? 1 - Math.max(0, sse) / design.yy : 0;
+
+  // Covariance σ²(G_PP)⁻¹ on the passive set; σ² from the residual with its degrees of freedom.
+  const dof = design.residualSamples - active.length - (refineShifts ? active.length : 0);
+  const sigma2 = dof > 0 ? sseGrid / dof : NaN;
+  const variances = new Float64Array(active.length).fill(NaN);
+  if (Number.isFinite(sigma2)) {
+    for (let a = 0; a < active.length; a++) {
+      const e = new Float64Array(active.length);
+      e[a] = 1;
+      const col = spdSolve(G, e);
+      if (col) variances[a] = sigma2 * design.gridScale * col[a];
+    }
+  }
+
+  const totalExplained = Math.max(design.totalIntensity, active.reduce((sum, i, a) => sum + c[a] * design.modelIntensity(current[i]), 0));
+  const allSignals = signalsOf(current);
+  const activeSignals = active.map((i) => allSignals[i]);
+  const components: FitComponent[] = active.map((i, a) => {
+    const { entry, nuclei } = kept[i];
+    const ev = fitEvidence(design, G, h, c, active.map((k) => current[k]), activeSignals, a);
+    const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
+    const share = totalExplained > 0 ? Math.min(1, (c[a] * design.modelIntensity(current[i])) / totalExplained) : 0;
+    return {
+      entryId: entry.id,
+      name: entry.name,
+      amountPerNucleus: c[a],
+      amountUncertainty: Number.isFinite(variances[a]) && variances[a] >= 0 ? Math.sqrt(variances[a]) : null,
+      integral: c[a] * nuclei,
+      nuclei: Math.round(nuclei),
+      share,
+      shiftOffsetPpm: offsets[i],
+      uniqueness: ev.uniqueness,
+      coverage: ev.coverage,
+      resolvedLines: ev.resolvedLines,
+      snr,
+      belowQuantitationLimit: snr !== null && snr < QUANTITATION_SNR,
+      curve: prepared ? maybeReverse(curves[a], prepared.reversed) : Array.from(curves[a]),
+    };
+  });
+
+  const unexplainedPeaks: UnexplainedPeak[] = [];
+  if (mixture.kind === 'peaks') {
+    const fittedAt = (x: number) => {
+      let s = 0;
+      active.forEach((i, a) => {
+        s += c[a] * design.dotLL(current[i], [{ x, a: 1, w: 0 }]) ;
+      });
+      return s;
+    };
+    for (const p of mixture.peaks) {
+      const here = design.dotLY([{ x: p.shift, a: 1, w: 0 }]);
+      const model = fittedAt(p.shift);
+      if (here > 0 && model < unexplainedFraction * here) unexplainedPeaks.push({ shift: p.shift, intensity: p.intensity, fitted: (model / here) * p.intensity });
+    }
+  } else {
+    const y = design.mixtureCurve;
+    let ymax = 0;
+    for (const v of y) ymax = Math.max(ymax, v);
+    const floor = Math.max(3 * (noise ?? 0), 1e-3 * ymax);
+    for (let p = 1; p < n - 1; p++) {
+      if (y[p] > floor && y[p] >= y[p - 1] && y[p] > y[p + 1] && fitted[p] < unexplainedFraction * y[p]) {
+        unexplainedPeaks.push({ shift: design.axis[p], intensity: y[p], fitted: fitted[p] });
+      }
+    }
+    unexplainedPeaks.sort((p, q) => q.intensity - p.intensity);
+    unexplainedPeaks.splice(200);
+  }
+
+  const out = (a: Float64Array) => (prepared ? maybeReverse(a, prepared.reversed) : Array.from(a));
+  return {
+    kind: mixture.kind,
+    linewidthHz,
+    linewidthSource,
+    noiseLevel: noise,
+    components,
+    rejected,
+    axis: out(design.axis),
+    mixtureCurve: out(design.mixtureCurve),
+    fittedSum: out(fitted),
+    residual: out(residual),
+    rSquared,
+    unexplainedPeaks,
+  };
+}

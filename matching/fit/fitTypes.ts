@@ -1,0 +1,34 @@
+/** A simulated line in the fit: centre x (ppm), area a (nuclei) and FWHM w (ppm). */
+export interface FitLine {
+  x: number;
+  a: number;
+  w: number;
+}
+
+/** The inner products a fit needs, for either kind of mixture (spectrum grid or peak list). */
+export interface FitDesign {
+  kind: 'spectrum' | 'peaks';
+  /** ⟨y, y⟩ */
+  yy: number;
+  /** ⟨r_A, r_B⟩ for two sets of lines. */
+  dotLL(A: FitLine[], B: FitLine[]): number;
+  /** ⟨r_A, y⟩ */
+  dotLY(A: FitLine[]): number;
+  /** g(δ) = ⟨r(δ), y − Σ c_k r_k⟩ for each offset δ (ppm), the others fixed; approximate (search only). */
+  profile(lines: FitLine[], offsets: number[], others: { lines: FitLine[]; c: number }[]): Float64Array;
+  /** Model curve of `lines` on the axis. */
+  curve(lines: FitLine[]): Float64Array;
+  /** ppm axis (ascending) and the mixture on it. */
+  axis: Float64Array;
+  mixtureCurve: Float64Array;
+  /** Sum of the positive mixture intensity in the units of `modelIntensity`. */
+  totalIntensity: number;
+  modelIntensity(lines: FitLine[]): number;
+  /** Scale turning σ²·G⁻¹ into the covariance of the amounts, and degrees of freedom of the residual. */
+  residualSamples: number;
+  gridScale: number;
+}
+
+export function shiftLines(lines: FitLine[], delta: number): FitLine[] {
+  return delta === 0 ? lines : lines.map((l) => ({ x: l.x + delta, a: l.a, w: l.w }));
+}

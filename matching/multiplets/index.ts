@@ -1,0 +1,2 @@
+export * from './multipletToLines';
+export * from './entryToLines';

@@ -1,0 +1,4 @@
+export * from './multipletLinePositions';
+export * from './peaksLowerBound';
+export * from './peaksFindInWindow';
+export * from './mixturePeaks';

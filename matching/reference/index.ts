@@ -1,0 +1,4 @@
+export * from './ppmToHz';
+export * from './hzToPpm';
+export * from './mixtureReferenceFind';
+export * from './mixtureReference';

@@ -1,0 +1,2 @@
+export * from './solventResidualSignals';
+export * from './solventExclusionRegions';

@@ -1,0 +1,2 @@
+export * from './spectrumNoiseEstimate';
+export * from './spectrumPickPeaks';
