@@ -1,0 +1,114 @@
+import { z } from 'zod';
+
+const finite = z.number().finite();
+
+/** Options of the overlay fit. Defaults are applied by the engine when it unpacks them. */
+export const FitOptionsSchema = z.object({
+  linewidthHz: z.number().positive().max(100).optional().describe('FWHM of every simulated line, Hz; default: estimated from the mixture'),
+  tolerancePpm: z.number().nonnegative().max(1).optional().describe('largest common shift offset per candidate, ppm; default DEFAULT_TOLERANCE_PPM of the nucleus'),
+  refineShifts: z.boolean().optional().describe('search a common shift offset per candidate (default true)'),
+  minShare: z.number().min(0).max(1).optional().describe('candidates explaining less than this share of the mixture intensity are rejected (default 0.002)'),
+  cutoff: z.number().positive().max(0.1).optional().describe('a line is evaluated where it exceeds cutoff × its height (default 1e-7)'),
+  noiseLevel: z.number().positive().optional().describe('RMS noise of the mixture intensities; default: estimated (spectra) or unknown (peak lists)'),
+  unexplainedFraction: z.number().min(0).max(1).optional().describe('a mixture peak is unexplained when the fit reaches less than this fraction of it (default 0.5)'),
+});
+export type FitOptions = z.infer<typeof FitOptionsSchema>;
+
+export const RejectionReasonSchema = z.enum(['zero-amount', 'below-share', 'below-detection', 'no-lines']);
+export type RejectionReason = z.infer<typeof RejectionReasonSchema>;
+
+/** One candidate kept by the fit. Amounts are per nucleus, so they compare as mole ratios. */
+export const FitComponentSchema = z.object({
+  entryId: z.string(),
+  name: z.string(),
+  amountPerNucleus: finite.nonnegative().describe('fitted integral per nucleus, mixture intensity × ppm'),
+  amountUncertainty: finite.nonnegative().nullable().describe('standard uncertainty of amountPerNucleus from σ²(AᵀA)⁻¹; null if undetermined'),
+  integral: finite.nonnegative().describe('fitted integral of all the candidate’s lines'),
+  nuclei: z.number().int().positive().describe('nuclei of the candidate’s signals in this nucleus'),
+  share: finite.min(0).max(1).describe('share of the mixture intensity the candidate explains'),
+  shiftOffsetPpm: finite.describe('common shift offset applied to all its signals, ppm'),
+  uniqueness: finite.min(0).max(1).describe('share of its contribution no other candidate can take over'),
+  coverage: finite.min(0).max(1).describe('nuclei-weighted share of its signals the mixture supports'),
+  resolvedLines: finite.nonnegative().describe('supported lines separated by at least one linewidth'),
+  snr: finite.nonnegative().nullable().describe('height of its tallest fitted line / RMS noise; null when the noise is unknown'),
+  belowQuantitationLimit: z.boolean().describe('true when snr < 10 (ICH Q2(R1) quantitation limit, common practice)'),
+  curve: z.array(finite).describe('contribution on FitResult.axis'),
+});
+export type FitComponent = z.infer<typeof FitComponentSchema>;
+
+export const RejectedCandidateSchema = z.object({
+  entryId: z.string(),
+  name: z.string(),
+  reason: RejectionReasonSchema,
+  message: z.string(),
+  share: finite.min(0).max(1),
+});
+export type RejectedCandidate = z.infer<typeof RejectedCandidateSchema>;
+
+export const UnexplainedPeakSchema = z.object({ shift: finite, intensity: finite, fitted: finite });
+export type UnexplainedPeak = z.infer<typeof UnexplainedPeakSchema>;
+
+export const FitResultSchema = z.object({
+  kind: z.enum(['spectrum', 'peaks']),
+  linewidthHz: finite.positive(),
+  linewidthSource: z.enum(['option', 'mixture', 'default']),
+  noiseLevel: finite.nonnegative().nullable(),
+  components: z.array(FitComponentSchema),
+  rejected: z.array(RejectedCandidateSchema),
+  axis: z.array(finite).describe('ppm axis of the curves'),
+  mixtureCurve: z.array(finite),
+  fittedSum: z.array(finite),
+  residual: z.array(finite),
+  rSquared: finite.describe('uncentred: 1 − ‖y − ŷ‖²/‖y‖²'),
+  unexplainedPeaks: z.array(UnexplainedPeakSchema),
+});
+export type FitResult = z.infer<typeof FitResultSchema>;
+
+/** The internal standard named by the user: an entry fitted in the mixture, its concentration and nuclei. */
+export const InternalStandardSchema = z.object({
+  entryId: z.string().min(1),
+  concentrationMM: z.number().finite().positive().describe('concentration of the standard in the sample, mmol/L'),
+  nuclei: z.number().int().positive().optional().describe('nuclei behind the standard’s fitted integral; default: its entry’s nuclei'),
+});
+export type InternalStandard = z.infer<typeof InternalStandardSchema>;
+
+export const AmountResultSchema = z.object({
+  entryId: z.string(),
+  name: z.string(),
+  moleFraction: finite.min(0).max(1).describe('among the fitted compounds (the standard excluded when there is one)'),
+  moleFractionUncertainty: finite.nonnegative().nullable(),
+  concentrationMM: finite.nonnegative().nullable().describe('qNMR internal-standard equation; null without a standard'),
+  concentrationUncertaintyMM: finite.nonnegative().nullable(),
+  snr: finite.nonnegative().nullable(),
+  belowQuantitationLimit: z.boolean(),
+  isStandard: z.boolean(),
+});
+export type AmountResult = z.infer<typeof AmountResultSchema>;
+
+export const QValueSchema = z.object({
+  entryId: z.string(),
+  score: finite.min(0),
+  qValue: finite.min(0).max(1),
+});
+export type QValue = z.infer<typeof QValueSchema>;
+
+export const AnalysisOptionsSchema = z.object({
+  fit: FitOptionsSchema.optional(),
+  standard: InternalStandardSchema.optional(),
+  decoySets: z.number().int().min(1).max(100).optional().describe('decoy copies of the library (default 5)'),
+  seed: z.number().int().optional().describe('seed of the decoy generator (default 1)'),
+});
+export type AnalysisOptions = z.infer<typeof AnalysisOptionsSchema>;
+
+export const AnalysisReportSchema = z.object({
+  mixtureName: z.string(),
+  nucleus: z.enum(['1H', '13C']),
+  screenedCandidates: z.array(z.string()).describe('entry ids kept by screening and passed to the fit'),
+  fit: FitResultSchema,
+  amounts: z.array(AmountResultSchema),
+  qValues: z.array(QValueSchema),
+  decoySets: z.number().int().positive(),
+  warnings: z.array(z.string()),
+  caution: z.string(),
+});
+export type AnalysisReport = z.infer<typeof AnalysisReportSchema>;
