@@ -3,5 +3,11 @@ export interface CliCommand {
   run(argv: string[]): Promise<number>;
 }
 
+import { screenCommand } from './screen';
+import { batchCommand } from './batch';
+
 // Each command registers itself here (one line each).
-export const commands: Record<string, CliCommand> = {};
+export const commands: Record<string, CliCommand> = {
+  screen: screenCommand,
+  batch: batchCommand,
+};
