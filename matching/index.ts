@@ -11,3 +11,4 @@ export * from './reference';
 export * from './multiplets';
 export * from './lineshape';
 export * from './fit';
+export * from './library';
