@@ -19,6 +19,8 @@ import { spdSolve } from './spdSolve';
 export const QUANTITATION_SNR = 10;
 /** Detection limit S/N = 3 (ICH Q2(R1), signal-to-noise approach; common practice). */
 export const DETECTION_SNR = 3;
+/** Line tails kept while locating offsets and the linewidth (relative to the line height). */
+const SEARCH_DESIGN_CUTOFF = 1e-5;
 
 /** Height of the tallest single line per unit amount: a unit-area Lorentzian peaks at 2/(π·Γ). */
 function tallest(lines: FitLine[]): number {
@@ -121,79 +123,93 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     design = fitDesignPeaks(peaks, [lo - tolerancePpm, hi + tolerancePpm], tolerancePpm);
   }
 
-  let active = kept.map((_, i) => i);
   let offsets = new Array<number>(kept.length).fill(0);
   let base = linesAt(linewidthHz);
   let current = base;
+  // Offsets and the linewidth are located on a design with shorter line tails (cheaper); the
+  // amounts reported come from the exact design.
+  const rough = prepared ? fitDesignSpectrum(prepared.axis, prepared.y, Math.max(cutoff, SEARCH_DESIGN_CUTOFF)) : design;
   const search = (rounds: number) => {
     if (!refineShifts || tolerancePpm <= 0 || kept.length === 0) return;
     const minW = Math.min(...base.flatMap((k) => k.map((l) => l.w)));
     const gridStep = prepared ? (prepared.axis[prepared.axis.length - 1] - prepared.axis[0]) / (prepared.axis.length - 1) : 0;
     const step = Math.max(minW / 4, gridStep / 2, tolerancePpm / 400);
-    const found = fitSearchOffsets(design, base, tolerancePpm, step, rounds);
+    const found = fitSearchOffsets(rough, base, tolerancePpm, step, rounds);
     offsets = found.offsets;
     current = found.lines;
   };
-  search(3);
-  // A spectrum without a stated linewidth: refine the common width by golden-section search of
-  // the residual (offsets held), between half and twice the estimate, then re-search offsets.
-  if (mixture.kind === 'spectrum' && parsed.data.linewidthHz === undefined && kept.length > 0) {
-    const sseAt = (widthHz: number) => {
-      const lines = linesAt(widthHz).map((l, i) => shiftLines(l, offsets[i]));
-      const ne = fitNormalEquations(design, lines);
-      const x = nnlsSolve(ne.G, ne.h).x;
-      let v = design.yy;
-      for (let a = 0; a < x.length; a++) {
-        v -= 2 * ne.h[a] * x[a];
-        for (let b = 0; b < x.length; b++) v += x[a] * ne.G[a][b] * x[b];
-      }
-      return v;
-    };
-    const phi = (Math.sqrt(5) - 1) / 2;
-    let lo = Math.log(linewidthHz / 2);
-    let hi = Math.log(linewidthHz * 2);
-    let p = hi - phi * (hi - lo);
-    let q = lo + phi * (hi - lo);
-    let fp = sseAt(Math.exp(p));
-    let fq = sseAt(Math.exp(q));
-    for (let it = 0; it < 14; it++) {
-      if (fp < fq) { hi = q; q = p; fq = fp; p = hi - phi * (hi - lo); fp = sseAt(Math.exp(p)); }
-      else { lo = p; p = q; fp = fq; q = lo + phi * (hi - lo); fq = sseAt(Math.exp(q)); }
-    }
-    linewidthHz = Math.exp((lo + hi) / 2);
-    base = linesAt(linewidthHz);
-    current = base.map((l, i) => shiftLines(l, offsets[i]));
-    search(2);
-  }
 
   // Solve, reject zero or negligible candidates, and solve again without them.
   let c: Float64Array = new Float64Array(0);
   let G: Float64Array[] = [];
   let h: Float64Array = new Float64Array(0);
-  for (let pass = 0; pass < 5; pass++) {
-    ({ G, h } = fitNormalEquations(design, active.map((i) => current[i])));
-    c = nnlsSolve(G, h).x;
-    const drop: number[] = [];
-    const explained = active.reduce((sum, i, a) => sum + c[a] * design.modelIntensity(current[i]), 0);
-    const total = Math.max(design.totalIntensity, explained);
-    active.forEach((i, a) => {
-      const share = total > 0 ? Math.min(1, (c[a] * design.modelIntensity(current[i])) / total) : 0;
-      const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
-      const { entry } = kept[i];
-      const reject = (reason: RejectedCandidate['reason'], message: string) => {
-        rejected.push({ entryId: entry.id, name: entry.name, reason, message, share });
-        drop.push(i);
+  const solveAndReject = (on: FitDesign, record: boolean): number[] => {
+    let act = kept.map((_, i) => i);
+    for (let pass = 0; pass < 5; pass++) {
+      ({ G, h } = fitNormalEquations(on, act.map((i) => current[i])));
+      c = nnlsSolve(G, h).x;
+      const drop: number[] = [];
+      const explained = act.reduce((sum, i, a) => sum + c[a] * on.modelIntensity(current[i]), 0);
+      const total = Math.max(on.totalIntensity, explained);
+      act.forEach((i, a) => {
+        const share = total > 0 ? Math.min(1, (c[a] * on.modelIntensity(current[i])) / total) : 0;
+        const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
+        const { entry } = kept[i];
+        const reject = (reason: RejectedCandidate['reason'], message: string) => {
+          if (record) rejected.push({ entryId: entry.id, name: entry.name, reason, message, share });
+          drop.push(i);
+        };
+        if (!(c[a] > 0)) reject('zero-amount', 'the fit drove its amount to zero');
+        else if (share < minShare) {
+          reject('below-share', `explains ${(share * 100).toPrecision(2)} % of the mixture intensity, below the ${(minShare * 100).toPrecision(2)} % threshold`);
+        } else if (snr !== null && snr < DETECTION_SNR) {
+          reject('below-detection', `its tallest fitted line has S/N ${snr.toFixed(1)}, below the detection limit ${DETECTION_SNR}`);
+        }
+      });
+      if (drop.length === 0) break;
+      act = act.filter((i) => !drop.includes(i));
+    }
+    return act;
+  };
+
+  search(3);
+  // A spectrum without a stated linewidth: refine the common width by golden-section search of
+  // the residual, with only the candidates that survive a
+  // first solve (spurious ones fitting noise would pull the width down), then re-search offsets.
+  if (mixture.kind === 'spectrum' && parsed.data.linewidthHz === undefined && kept.length > 0) {
+    const survivors = solveAndReject(rough, false);
+    if (survivors.length > 0) {
+      const sseAt = (widthHz: number) => {
+        const all = linesAt(widthHz);
+        const lines = survivors.map((i) => shiftLines(all[i], offsets[i]));
+        const ne = fitNormalEquations(rough, lines);
+        const x = nnlsSolve(ne.G, ne.h).x;
+        let v = rough.yy;
+        for (let a = 0; a < x.length; a++) {
+          v -= 2 * ne.h[a] * x[a];
+          for (let b = 0; b < x.length; b++) v += x[a] * ne.G[a][b] * x[b];
+        }
+        return v;
       };
-      if (!(c[a] > 0)) reject('zero-amount', 'the fit drove its amount to zero');
-      else if (share < minShare) {
-        reject('below-share', `explains ${(share * 100).toPrecision(2)} % of the mixture intensity, below the ${(minShare * 100).toPrecision(2)} % threshold`);
-      } else if (snr !== null && snr < DETECTION_SNR) {
-        reject('below-detection', `its tallest fitted line has S/N ${snr.toFixed(1)}, below the detection limit ${DETECTION_SNR}`);
+      const phi = (Math.sqrt(5) - 1) / 2;
+      // The bracket spans the estimate and the usual 0.3–3 Hz of solution lines (common practice).
+      let lo = Math.log(Math.min(linewidthHz / 3, 0.3));
+      let hi = Math.log(Math.max(linewidthHz * 3, 3));
+      let p = hi - phi * (hi - lo);
+      let q = lo + phi * (hi - lo);
+      let fp = sseAt(Math.exp(p));
+      let fq = sseAt(Math.exp(q));
+      for (let it = 0; it < 18; it++) {
+        if (fp < fq) { hi = q; q = p; fq = fp; p = hi - phi * (hi - lo); fp = sseAt(Math.exp(p)); }
+        else { lo = p; p = q; fp = fq; q = lo + phi * (hi - lo); fq = sseAt(Math.exp(q)); }
       }
-    });
-    if (drop.length === 0) break;
-    active = active.filter((i) => !drop.includes(i));
+      linewidthHz = Math.exp((lo + hi) / 2);
+      base = linesAt(linewidthHz);
+      current = base.map((l, i) => shiftLines(l, offsets[i]));
+      search(2);
+    }
   }
+  const active = solveAndReject(design, true);
 
   const n = design.axis.length;
   const fitted = new Float64Array(n);

@@ -18,7 +18,7 @@ function median(values: number[]): number {
 /**
  * Linewidth (FWHM, Hz) of the mixture: the median of the peak widths of a peak list, or for a
  * spectrum the median width of the tallest maxima, each from the parabola that 1/intensity
- * follows near a Lorentzian maximum (three points). Falls back to DEFAULT_LINEWIDTH_HZ.
+ * follows near a Lorentzian maximum (the maximum and two points near half height). Falls back to DEFAULT_LINEWIDTH_HZ.
  */
 export function mixtureEstimateLinewidth(mixture: Mixture): LinewidthEstimate {
   const mhz = nucleusFrequency(mixture.nucleus, mixture.mhz);
@@ -37,9 +37,13 @@ export function mixtureEstimateLinewidth(mixture: Mixture): LinewidthEstimate {
   for (const i of maxima.slice(0, 30)) {
     // 1/L(x) = (1/H)·(1 + 4(x − x0)²/Γ²) is a parabola in x; through three points around the
     // maximum it gives Γ exactly for a sampled, isolated Lorentzian.
-    const x0 = ppm[i - 1], x1 = ppm[i], x2 = ppm[i + 1];
-    const u0 = 1 / y[i - 1], u1 = 1 / y[i], u2 = 1 / y[i + 1];
-    if (!(y[i - 1] > 0 && y[i + 1] > 0)) continue;
+    // The outer points are taken near half height (not the next samples) so that noise on a
+    // finely sampled line does not dominate the curvature.
+    let k = 1;
+    while (k < 200 && i - k > 0 && i + k < n - 1 && y[i - k] > 0.6 * y[i] && y[i + k] > 0.6 * y[i]) k++;
+    const x0 = ppm[i - k], x1 = ppm[i], x2 = ppm[i + k];
+    const u0 = 1 / y[i - k], u1 = 1 / y[i], u2 = 1 / y[i + k];
+    if (!(y[i - k] > 0 && y[i + k] > 0)) continue;
     const d01 = (u1 - u0) / (x1 - x0);
     const d12 = (u2 - u1) / (x2 - x1);
     const a = (d12 - d01) / (x2 - x0);
