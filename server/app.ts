@@ -10,8 +10,17 @@ import { authRoutes } from './auth/router';
 import { AuthService } from './auth/service';
 import { apiNotFound, errorMiddleware } from './errors/middleware';
 import { libraryRoutes } from './library/router';
+import { adminRoutes } from './admin/router';
+import { reviewRoutes } from './review/router';
+import { ReviewService } from './review/service';
+import { submissionRoutes } from './submissions/router';
+import { SubmissionService } from './submissions/service';
+import { syncRoutes } from './sync/router';
 import type { Mailer } from './mail/mailer';
 import { webRouter } from './web/static';
+
+/** Reported by /api/health; bump with the API shapes. */
+export const SERVER_VERSION = '0.1.0';
 
 export interface AppDeps {
   dataSource: DataSource;
@@ -21,7 +30,7 @@ export interface AppDeps {
 }
 
 export interface TesseraApp extends Express {
-  locals: Express['locals'] & { routes: RouteDef[]; services: { auth: AuthService } };
+  locals: Express['locals'] & { routes: RouteDef[]; services: { auth: AuthService; submissions: SubmissionService; review: ReviewService } };
 }
 
 /** Builds the Express app on an initialized data source. Listening is server/index.ts's job. */
@@ -29,7 +38,16 @@ export function createApp(deps: AppDeps): TesseraApp {
   const { dataSource: ds, config, mailer } = deps;
   const logger = deps.logger ?? pino({ level: config.logLevel });
   const auth = new AuthService(ds, config, mailer);
-  const routes: RouteDef[] = [...authRoutes(auth, config, ds), ...libraryRoutes(ds)];
+  const submissions = new SubmissionService(ds, config, mailer, logger);
+  const review = new ReviewService(ds, config, mailer, logger);
+  const routes: RouteDef[] = [
+    ...adminRoutes(ds, SERVER_VERSION),
+    ...authRoutes(auth, config, ds),
+    ...libraryRoutes(ds),
+    ...submissionRoutes(submissions, config),
+    ...reviewRoutes(review),
+    ...syncRoutes(ds, submissions),
+  ];
 
   const app = express() as TesseraApp;
   app.disable('x-powered-by');
@@ -65,6 +83,6 @@ export function createApp(deps: AppDeps): TesseraApp {
   app.use(errorMiddleware(logger));
 
   app.locals.routes = routes;
-  app.locals.services = { auth };
+  app.locals.services = { auth, submissions, review };
   return app;
 }

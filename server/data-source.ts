@@ -1,7 +1,7 @@
 import 'reflect-metadata';
 import fs from 'node:fs';
 import path from 'node:path';
-import { DataSource } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import { ENTITIES } from './entities';
 import { MIGRATIONS } from './migrations';
 
@@ -26,4 +26,19 @@ export function createDataSource(databasePath: string): DataSource {
     synchronize: false,
     logging: false,
   });
+}
+
+const locks = new WeakMap<DataSource, Promise<unknown>>();
+
+/**
+ * Runs `fn` in a transaction, one at a time per data source. TypeORM's better-sqlite3 driver has a
+ * single connection and treats a second concurrent `transaction()` as a nested SAVEPOINT inside
+ * the first, so two requests interleaving at an `await` would share (and could roll back) each
+ * other's work. Every write in the server goes through here; reads may run outside.
+ */
+export function tx<T>(ds: DataSource, fn: (m: EntityManager) => Promise<T>): Promise<T> {
+  const previous = locks.get(ds) ?? Promise.resolve();
+  const run = previous.catch(() => undefined).then(() => ds.transaction(fn));
+  locks.set(ds, run.catch(() => undefined));
+  return run;
 }

@@ -54,7 +54,7 @@ async function main(): Promise<void> {
     stopping = true;
     logger.info({ signal }, 'shutting down');
     const force = setTimeout(() => process.exit(1), 5000);
-    force.unref();
+    (force as { unref?: () => void }).unref?.();
     server.close(async () => {
       mailer.close();
       await ds.destroy().catch(() => undefined);

@@ -10,6 +10,7 @@ import { RefreshToken } from '../entities/RefreshToken';
 import { User } from '../entities/User';
 import type { Mailer } from '../mail/mailer';
 import { audit } from '../admin/audit';
+import { tx } from '../data-source';
 import { signAccessToken } from './access';
 
 const sha256 = (s: string) => crypto.createHash('sha256').update(s).digest('hex');
@@ -33,14 +34,15 @@ export class AuthService {
     return bcrypt.hash(password, this.config.bcryptRounds);
   }
 
-  async createUser(m: EntityManager, input: { email: string; displayName: string; role: Role; password: string; demo?: boolean }): Promise<User> {
+  /** Hash the password (slow) before taking the write lock, then call this inside tx. */
+  async createUser(m: EntityManager, input: { email: string; displayName: string; role: Role; passwordHash: string; demo?: boolean }): Promise<User> {
     const now = new Date();
     const user = Object.assign(new User(), {
       id: crypto.randomUUID(),
       email: input.email.trim().toLowerCase(),
       displayName: input.displayName,
       role: input.role,
-      passwordHash: await this.hashPassword(input.password),
+      passwordHash: input.passwordHash,
       demo: input.demo ?? false,
       disabled: false,
       createdAt: now,
@@ -53,11 +55,14 @@ export class AuthService {
   async register(body: RegisterBody): Promise<SessionResponse> {
     const existing = await this.ds.getRepository(User).findOneBy({ email: body.email });
     if (existing) throw new AppError(409, 'email_taken', 'email: an account with this address exists; sign in or reset the password', { issues: [{ field: 'email', message: 'already registered' }] });
-    const user = await this.ds.transaction(async (m) => {
-      const u = await this.createUser(m, body);
+    const passwordHash = await this.hashPassword(body.password);
+    const user = await tx(this.ds, async (m) => {
+      if (await m.getRepository(User).findOneBy({ email: body.email })) return null;
+      const u = await this.createUser(m, { ...body, passwordHash });
       await audit(m, u.id, 'account.register', 'user', u.id, { role: u.role });
       return u;
     });
+    if (!user) throw new AppError(409, 'email_taken', 'email: an account with this address exists; sign in or reset the password', { issues: [{ field: 'email', message: 'already registered' }] });
     return this.issueSession(user);
   }
 
@@ -71,47 +76,42 @@ export class AuthService {
 
   /** Rotates: the presented token is revoked and a new pair issued. Reusing a revoked token revokes the whole account's sessions (it was probably stolen). */
   async refresh(refreshToken: string): Promise<SessionResponse> {
-    const repo = this.ds.getRepository(RefreshToken);
-    const row = await repo.findOneBy({ tokenHash: sha256(refreshToken) });
-    if (!row) throw unauthorized('refresh token unknown: sign in again');
-    if (row.revokedAt) {
-      await this.revokeAll(row.userId);
-      throw unauthorized('refresh token already used or revoked: sign in again');
-    }
-    if (row.expiresAt.getTime() <= Date.now()) throw unauthorized('refresh token expired: sign in again');
-    const user = await this.ds.getRepository(User).findOneBy({ id: row.userId });
-    if (!user || user.disabled) throw unauthorized('account not found or disabled');
-    const result = await repo
-      .createQueryBuilder()
-      .update()
-      .set({ revokedAt: new Date() })
-      .where('id = :id AND revoked_at IS NULL', { id: row.id })
-      .execute();
-    // Two refreshes racing with one token: only the first wins.
-    if (!result.affected) throw unauthorized('refresh token already used or revoked: sign in again');
-    return this.issueSession(user);
+    const hash = sha256(refreshToken);
+    const outcome = await tx(this.ds, async (m) => {
+      const repo = m.getRepository(RefreshToken);
+      const row = await repo.findOneBy({ tokenHash: hash });
+      if (!row) return { error: 'refresh token unknown: sign in again' } as const;
+      if (row.revokedAt) {
+        await revokeAllIn(m, row.userId);
+        return { error: 'refresh token already used or revoked: sign in again' } as const;
+      }
+      if (row.expiresAt.getTime() <= Date.now()) return { error: 'refresh token expired: sign in again' } as const;
+      const user = await m.getRepository(User).findOneBy({ id: row.userId });
+      if (!user || user.disabled) return { error: 'account not found or disabled' } as const;
+      await repo.update({ id: row.id }, { revokedAt: new Date() });
+      return { session: await this.issueSessionIn(m, user) } as const;
+    });
+    // Thrown outside so the reuse revocation above commits.
+    if ('error' in outcome) throw unauthorized(outcome.error);
+    return outcome.session;
   }
 
   async signOut(userId: string, refreshToken: string | undefined, everywhere: boolean): Promise<void> {
-    if (everywhere) return this.revokeAll(userId);
-    if (!refreshToken) return;
-    await this.ds
-      .getRepository(RefreshToken)
-      .createQueryBuilder()
-      .update()
-      .set({ revokedAt: new Date() })
-      .where('token_hash = :h AND user_id = :u AND revoked_at IS NULL', { h: sha256(refreshToken), u: userId })
-      .execute();
+    if (!everywhere && !refreshToken) return;
+    await tx(this.ds, async (m) => {
+      if (everywhere) return revokeAllIn(m, userId);
+      await m
+        .getRepository(RefreshToken)
+        .createQueryBuilder()
+        .update()
+        .set({ revokedAt: new Date() })
+        .where('token_hash = :h AND user_id = :u AND revoked_at IS NULL', { h: sha256(refreshToken!), u: userId })
+        .execute();
+    });
   }
 
-  async revokeAll(userId: string): Promise<void> {
-    await this.ds
-      .getRepository(RefreshToken)
-      .createQueryBuilder()
-      .update()
-      .set({ revokedAt: new Date() })
-      .where('user_id = :u AND revoked_at IS NULL', { u: userId })
-      .execute();
+  revokeAll(userId: string): Promise<void> {
+    return tx(this.ds, (m) => revokeAllIn(m, userId));
   }
 
   /** Silent about unknown addresses so the route cannot be used to find out who has an account. */
@@ -120,7 +120,7 @@ export class AuthService {
     if (!user || user.disabled) return;
     const token = newSecret();
     const now = new Date();
-    await this.ds.getRepository(PasswordReset).insert(
+    await tx(this.ds, (m) => m.getRepository(PasswordReset).insert(
       Object.assign(new PasswordReset(), {
         id: crypto.randomUUID(),
         userId: user.id,
@@ -129,7 +129,7 @@ export class AuthService {
         usedAt: null,
         createdAt: now,
       }),
-    );
+    ));
     const minutes = Math.round(this.config.passwordResetTtlSeconds / 60);
     await this.mailer.send({
       kind: 'password_reset',
@@ -149,7 +149,7 @@ export class AuthService {
       throw new AppError(400, 'invalid_token', 'token: unknown, used or expired; ask for a new reset e-mail', { issues: [{ field: 'token', message: 'unknown, used or expired' }] });
     }
     const passwordHash = await this.hashPassword(password);
-    await this.ds.transaction(async (m) => {
+    await tx(this.ds, async (m) => {
       const used = await m
         .getRepository(PasswordReset)
         .createQueryBuilder()
@@ -159,21 +159,19 @@ export class AuthService {
         .execute();
       if (!used.affected) throw new AppError(400, 'invalid_token', 'token: unknown, used or expired; ask for a new reset e-mail', { issues: [{ field: 'token', message: 'already used' }] });
       await m.getRepository(User).update({ id: row.userId }, { passwordHash, updatedAt: new Date() });
-      await m
-        .getRepository(RefreshToken)
-        .createQueryBuilder()
-        .update()
-        .set({ revokedAt: new Date() })
-        .where('user_id = :u AND revoked_at IS NULL', { u: row.userId })
-        .execute();
+      await revokeAllIn(m, row.userId);
       await audit(m, row.userId, 'account.password_reset', 'user', row.userId, {});
     });
   }
 
-  private async issueSession(user: User): Promise<SessionResponse> {
+  private issueSession(user: User): Promise<SessionResponse> {
+    return tx(this.ds, (m) => this.issueSessionIn(m, user));
+  }
+
+  private async issueSessionIn(m: EntityManager, user: User): Promise<SessionResponse> {
     const refreshToken = newSecret();
     const now = new Date();
-    await this.ds.getRepository(RefreshToken).insert(
+    await m.getRepository(RefreshToken).insert(
       Object.assign(new RefreshToken(), {
         id: crypto.randomUUID(),
         userId: user.id,
@@ -186,4 +184,14 @@ export class AuthService {
     const pub = toPublicUser(user);
     return { accessToken: signAccessToken(pub, this.config.jwtSecret, this.config.accessTokenTtlSeconds), refreshToken, user: pub };
   }
+}
+
+export async function revokeAllIn(m: EntityManager, userId: string): Promise<void> {
+  await m
+    .getRepository(RefreshToken)
+    .createQueryBuilder()
+    .update()
+    .set({ revokedAt: new Date() })
+    .where('user_id = :u AND revoked_at IS NULL', { u: userId })
+    .execute();
 }

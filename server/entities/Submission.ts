@@ -44,6 +44,13 @@ export class Submission {
   @Column({ type: 'text' })
   checks: string;
 
+  /** Summary of `checks` for sorting the queue. */
+  @Column({ name: 'problem_count', type: 'integer', default: 0 })
+  problemCount: number;
+
+  @Column({ name: 'nearest_entry_id', type: 'varchar', length: 80, nullable: true })
+  nearestEntryId: string | null;
+
   @Column({ name: 'student_work', type: 'boolean', default: false })
   studentWork: boolean;
 

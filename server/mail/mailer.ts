@@ -3,6 +3,7 @@ import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import { randomUUID } from 'node:crypto';
 import type { Config } from '../config';
+import { tx } from '../data-source';
 import { MailMessage } from '../entities/MailMessage';
 
 export type MailKind = 'new_submission' | 'decision' | 'password_reset';
@@ -33,7 +34,7 @@ export function createOutboxMailer(ds: DataSource, from: string, logger: Logger)
     async send(m) {
       try {
         await transporter.sendMail({ from, to: m.to, subject: m.subject, text: m.text });
-        await ds.getRepository(MailMessage).insert(record(m, 'outbox', 'stored', m.text, null));
+        await tx(ds, (em) => em.getRepository(MailMessage).insert(record(m, 'outbox', 'stored', m.text, null)));
       } catch (err) {
         logger.error({ err, kind: m.kind }, 'outbox write failed');
       }
@@ -69,7 +70,7 @@ export function createSmtpMailer(ds: DataSource, config: Config, logger: Logger)
         logger.error({ err, kind: m.kind }, 'SMTP send failed');
       }
       try {
-        await ds.getRepository(MailMessage).insert(record(m, 'smtp', status, null, error));
+        await tx(ds, (em) => em.getRepository(MailMessage).insert(record(m, 'smtp', status, null, error)));
       } catch (err) {
         logger.error({ err }, 'mail record write failed');
       }

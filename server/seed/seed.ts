@@ -8,6 +8,7 @@ import type { AuthService } from '../auth/service';
 import { LibraryEntry } from '../entities/LibraryEntry';
 import { User } from '../entities/User';
 import { libraryAddRevision } from '../library/service';
+import { tx } from '../data-source';
 
 /** Invented demo accounts, one per role, all with the same published password. */
 export const DEMO_PASSWORD = 'tessera-demo';
@@ -61,11 +62,12 @@ export interface SeedResult {
  */
 export async function seed(ds: DataSource, auth: AuthService, libraryDir: string, logger: Logger): Promise<SeedResult> {
   const entries = readLibraryFiles(libraryDir);
-  return ds.transaction(async (m) => {
+  const demoHash = await auth.hashPassword(DEMO_PASSWORD);
+  return tx(ds, async (m) => {
     let usersCreated = 0;
     if ((await m.getRepository(User).count()) === 0) {
       for (const u of DEMO_USERS) {
-        await auth.createUser(m, { ...u, password: DEMO_PASSWORD, demo: true });
+        await auth.createUser(m, { ...u, passwordHash: demoHash, demo: true });
         usersCreated++;
       }
     }
