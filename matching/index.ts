@@ -12,3 +12,4 @@ export * from './multiplets';
 export * from './lineshape';
 export * from './fit';
 export * from './library';
+export * from './quant';

@@ -1,0 +1,4 @@
+export * from './qnmrConcentration';
+export * from './qnmrPurity';
+export * from './formulaMolarMass';
+export * from './fitToAmounts';
