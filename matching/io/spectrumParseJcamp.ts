@@ -34,7 +34,7 @@ export function spectrumParseJcamp(jcamp: string, meta: MixtureMeta = {}): Spect
   if (!jcamp.trimStart().startsWith('##')) throw new InputError('JCAMP-DX', [{ line: 1, message: 'not a JCAMP-DX file: it must start with a ##LABEL= line such as ##TITLE=' }]);
   let parsed: ReturnType<typeof convert>;
   try {
-    parsed = convert(jcamp, { keepRecordsRegExp: /.*/ });
+    parsed = convert(jcamp, { keepRecordsRegExp: /^(\.|\$|TITLE$|XUNITS$|YUNITS$|XYPOINTS$|XFACTOR$|YFACTOR$)/ });
   } catch (e) {
     throw new InputError('JCAMP-DX', [{ message: `cannot read the file: ${(e as Error).message}` }]);
   }
@@ -43,12 +43,14 @@ export function spectrumParseJcamp(jcamp: string, meta: MixtureMeta = {}): Spect
   if (block.ntuples && Object.keys(block.ntuples).length > 0 && (block.spectra?.length ?? 0) > 1) {
     throw new InputError('JCAMP-DX', [{ field: 'NTUPLES', message: '2D / multi-page JCAMP-DX is not supported; export a 1D spectrum' }]);
   }
-  const spectrum = block.spectra?.[0];
+  const info = block.info as Record<string, unknown>;
+  const userLabels = (block.meta ?? {}) as Record<string, unknown>;
+  // jcampconverter reads XYDATA and PEAK TABLE; an uneven axis written as XYPOINTS is read here.
+  const spectrum = block.spectra?.[0] ?? xyPointsRead(info);
   const data = spectrum?.data as { x?: ArrayLike<number>; y?: ArrayLike<number> } | undefined;
   if (!spectrum || !data?.x || !data?.y || data.x.length < 5) {
     throw new InputError('JCAMP-DX', [{ field: 'XYDATA', message: 'no spectrum data (XYDATA or XYPOINTS with at least 5 points) found' }]);
   }
-  const info = block.info as Record<string, unknown>;
   const nucleusText = text(info['.OBSERVENUCLEUS'])?.replace(/^\^/, '');
   let nucleus: Nucleus | undefined = m.nucleus;
   if (nucleus === undefined) {
@@ -57,7 +59,7 @@ export function spectrumParseJcamp(jcamp: string, meta: MixtureMeta = {}): Spect
     else throw new InputError('JCAMP-DX', [{ field: '.OBSERVE NUCLEUS', message: `nucleus "${nucleusText}" is not supported (1H or 13C)` }]);
   }
   const observe = Number(spectrum.observeFrequency ?? info['.OBSERVEFREQUENCY']);
-  const fileMhz = Number(text(info['$TESSERASPECTROMETERMHZ']));
+  const fileMhz = Number(text(userLabels['TESSERA SPECTROMETER MHZ']));
   const mhz = m.mhz ?? (Number.isFinite(fileMhz) && fileMhz > 0 ? fileMhz : observe > 0 ? (nucleus === '13C' ? observe / XI_13C : observe) : undefined);
   if (mhz === undefined) throw new InputError('JCAMP-DX', [{ field: '.OBSERVE FREQUENCY', message: 'spectrometer frequency is missing (no .OBSERVE FREQUENCY); give it as mhz' }]);
   const xUnits = String(spectrum.xUnits ?? info.XUNITS ?? '').toUpperCase();
@@ -69,9 +71,9 @@ export function spectrumParseJcamp(jcamp: string, meta: MixtureMeta = {}): Spect
   } else throw new InputError('JCAMP-DX', [{ field: 'XUNITS', message: `X units "${xUnits}" are not supported (PPM or HZ)` }]);
   const solventText = text(info['.SOLVENTNAME']);
   const solvent = m.solvent ?? SOLVENT_NAMES.find(([re]) => solventText !== undefined && re.test(solventText))?.[1] ?? 'other';
-  const refText = text(info['$TESSERAREFERENCE']);
+  const refText = text(userLabels['TESSERA REFERENCE']);
   const reference = m.reference ?? (refText === 'TMS' || refText === 'DSS' || refText === 'TSP' || refText === 'none' ? refText : undefined);
-  const demo = m.demo ?? (text(info['$TESSERADEMO']) === 'true' ? true : undefined);
+  const demo = m.demo ?? (text(userLabels['TESSERA DEMO']) === 'true' ? true : undefined);
   const out = SpectrumMixtureSchema.safeParse({
     ...m,
     kind: 'spectrum',
@@ -86,4 +88,26 @@ export function spectrumParseJcamp(jcamp: string, meta: MixtureMeta = {}): Spect
   });
   if (!out.success) throw new InputError('JCAMP-DX', out.error.issues.map((i) => ({ field: i.path.join('.'), message: i.message })));
   return out.data;
+}
+
+/** XYPOINTS=(XY..XY): "x, y" pairs (AFFN), scaled by XFACTOR/YFACTOR; null when absent or unreadable. */
+function xyPointsRead(info: Record<string, unknown>): { data: { x: number[]; y: number[] }; xUnits?: string; observeFrequency?: number } | null {
+  const raw = info.XYPOINTS;
+  if (typeof raw !== 'string') return null;
+  const xf = Number(info.XFACTOR ?? 1) || 1;
+  const yf = Number(info.YFACTOR ?? 1) || 1;
+  const x: number[] = [];
+  const y: number[] = [];
+  for (const line of raw.split(/\r?\n/).slice(1)) {
+    const t = line.replace(/\$\$.*$/, '').trim();
+    if (t === '') continue;
+    const pairs = t.split(/;/);
+    for (const pair of pairs) {
+      const [a, b] = pair.split(/[,\s]+/).filter(Boolean).map(Number);
+      if (!Number.isFinite(a) || !Number.isFinite(b)) return null;
+      x.push(a * xf);
+      y.push(b * yf);
+    }
+  }
+  return { data: { x, y }, xUnits: typeof info.XUNITS === 'string' ? info.XUNITS : undefined };
 }

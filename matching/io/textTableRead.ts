@@ -18,8 +18,8 @@ const DECIMAL_COMMA = /^[+-]?\d*,\d+([eE][+-]?\d+)?$/;
 
 /**
  * Splits delimited text into rows of fields with their line numbers, using papaparse for the
- * quoting rules. The delimiter is the first of tab, semicolon, comma, pipe that every one of the
- * first 50 data lines contains, else runs of spaces. A comma inside a number ("7,26") is read as a
+ * quoting rules. The delimiter is the one of tab, semicolon, comma, pipe found on most of the
+ * first 50 data lines (ties in that order), else runs of spaces. A comma inside a number ("7,26") is read as a
  * decimal comma when the delimiter is not a comma (European spreadsheet exports use ";" then).
  * Blank lines and lines starting with "#" are skipped.
  */
@@ -31,7 +31,16 @@ export function textTableRead(text: string): TextTable {
     if (t !== '' && !t.startsWith('#')) dataLines.push(i);
   });
   const probe = dataLines.slice(0, 50).map((i) => lines[i]);
-  const delimiter = (['\t', ';', ',', '|'] as const).find((d) => probe.length > 0 && probe.every((l) => l.includes(d))) ?? 'whitespace';
+  // The delimiter found on most lines wins; ties go to the earlier one, so "7,26;100" reads as ";".
+  let delimiter: TextTable['delimiter'] = 'whitespace';
+  let best = 0;
+  for (const d of ['\t', ';', ',', '|'] as const) {
+    const count = probe.filter((l) => l.includes(d)).length;
+    if (count > best) {
+      best = count;
+      delimiter = d;
+    }
+  }
   const rows: TextTableRow[] = [];
   if (dataLines.length > 0) {
     const body = dataLines.map((i) => (delimiter === 'whitespace' ? lines[i].trim().split(/\s+/).join('\t') : lines[i])).join('\n');

@@ -1,4 +1,3 @@
-export * from './multipletLinePositions';
 export * from './peaksLowerBound';
 export * from './peaksFindInWindow';
 export * from './mixturePeaks';

@@ -1,6 +1,6 @@
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Nucleus } from '../../shared/nucleus';
-import { multipletLinePositions } from '../peaks/multipletLinePositions';
+import { multipletToLines } from '../multiplets/multipletToLines';
 
 /**
  * A library flattened into typed arrays and binned by shift, for one nucleus and one spectrometer
@@ -59,7 +59,9 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     kept.push(entry);
     sigStartList.push(sigs.length);
     for (const [s, i] of mine) {
-      const lines = s.nucleus === '1H' ? multipletLinePositions(s.shift, s.multiplicity, s.j, mhz) : { ppm: [s.shift], weight: [1] };
+      // Line positions and binomial weights from the multiplet simulation (first order).
+      const sim = s.nucleus === '1H' ? multipletToLines(s, mhz) : [{ shift: s.shift, area: s.nuclei }];
+      const lines = { ppm: sim.map((l) => l.shift), weight: sim.map((l) => l.area / s.nuclei) };
       sigs.push({ e, src: i, n: s.nuclei, x: s.nucleus === '1H' && s.exchangeable === true, shift: s.shift, ppm: lines.ppm, w: lines.weight });
     }
   }

@@ -22,7 +22,7 @@ export interface PickedPeak {
 export interface PickPeaksResult {
   /** Peaks at or above the S/N threshold, by ascending shift. */
   peaks: PickedPeak[];
-  /** Local maxima above 1.5 σ but below the threshold (reported, never used). */
+  /** Local maxima above 1.5 σ but below the threshold, or narrower than 1.5 sampling intervals (reported, never used). */
   belowThreshold: PickedPeak[];
   /** Noise standard deviation (robust estimate). */
   noise: number;
@@ -68,19 +68,56 @@ export function spectrumPickPeaks(spectrum: SpectrumLike, options: PickPeaksOpti
   const noise = Math.max(spectrumNoiseEstimate(y), maxAbs * 1e-9, Number.MIN_VALUE);
   const found = gsd(
     { x, y },
-    { noiseLevel: baseline + 1.5 * noise, minMaxRatio: 0, realTopDetection: true, smoothY: false, sgOptions: { windowSize: 5, polynomial: 3 } },
+    { noiseLevel: baseline + 1.5 * noise, minMaxRatio: 0, smoothY: false, sgOptions: { windowSize: 5, polynomial: 3 } },
   );
   const peaks: PickedPeak[] = [];
   const below: PickedPeak[] = [];
+  const seen = new Set<number>();
   for (const p of found) {
-    const i = nearestIndex(x, p.x);
+    // gsd also reports inflections on the flanks of large lines; climb to the true maximum and
+    // keep each maximum once.
+    let i = nearestIndex(x, p.x);
+    while (i + 1 < n && y[i + 1] > y[i]) i++;
+    while (i > 0 && y[i - 1] > y[i]) i--;
+    if (seen.has(i)) continue;
+    seen.add(i);
     const height = y[i] - baseline;
     if (!(height > 0)) continue;
-    const snr = height / noise;
-    const peak: PickedPeak = { shift: p.x, height, snr, ...shape(x, y, i, baseline, noise, mhz) };
-    (snr >= snrThreshold ? peaks : below).push(peak);
+    // S/N on the height a peak stands above its deeper neighbourhood (prominence), so a noise
+    // wiggle on the tail of a big line does not count as a peak of its own.
+    const snr = Math.min(height, prominence(y, i)) / noise;
+    const peak: PickedPeak = { shift: vertex(x, y, i), height, snr, ...shape(x, y, i, baseline, noise, mhz) };
+    // A line sampled as NMR needs it spans ≥ 2 points per FWHM (BIPM ISRD-03: ≤ 0.4 Hz/point for
+    // < 1 Hz lines); a one-point spike narrower than 1.5 intervals is noise, not a line.
+    const spacingHz = ((x[n - 1] - x[0]) / (n - 1)) * mhz;
+    const real = snr >= snrThreshold && peak.widthHz >= 1.5 * spacingHz;
+    (real ? peaks : below).push(peak);
   }
+  peaks.sort((a, b) => a.shift - b.shift);
+  below.sort((a, b) => a.shift - b.shift);
   return { peaks, belowThreshold: below, noise, baseline };
+}
+
+/** Height of y[i] above the higher of the two lowest points reached before a higher point on each side. */
+function prominence(y: Float64Array, i: number): number {
+  const floor = (dir: 1 | -1): number => {
+    let min = y[i];
+    for (let k = i + dir; k >= 0 && k < y.length; k += dir) {
+      if (y[k] > y[i]) break;
+      if (y[k] < min) min = y[k];
+    }
+    return min;
+  };
+  return y[i] - Math.max(floor(-1), floor(1));
+}
+
+/** Position of the parabola through the maximum and its two neighbours. */
+function vertex(x: Float64Array, y: Float64Array, i: number): number {
+  if (i === 0 || i === x.length - 1) return x[i];
+  const denom = y[i - 1] - 2 * y[i] + y[i + 1];
+  if (denom >= 0) return x[i];
+  const t = (0.5 * (y[i - 1] - y[i + 1])) / denom;
+  return x[i] + t * ((x[i + 1] - x[i - 1]) / 2);
 }
 
 function nearestIndex(x: Float64Array, v: number): number {
@@ -107,13 +144,17 @@ function shape(x: Float64Array, y: Float64Array, i: number, baseline: number, no
     return x[k] + t * (x[k2] - x[k]);
   };
   const widthPpm = Math.max(cross(1) - cross(-1), x[Math.min(i + 1, x.length - 1)] - x[i]);
-  // Walk to the valley on each side: stop at the baseline (within 2σ) or where the curve rises again.
+  // Walk to the valley on each side: stop at the baseline (within 2σ), or where the curve climbs
+  // well above the lowest point seen (5σ: a neighbouring line, not noise), ending at that low point.
   const valley = (dir: 1 | -1): number => {
     let k = i;
+    let low = i;
     while (k + dir >= 0 && k + dir < x.length) {
       const next = y[k + dir];
-      if (next - baseline <= 2 * noise || next > y[k] + 2 * noise) break;
+      if (next - baseline <= 2 * noise) return k + dir;
+      if (next > y[low] + 5 * noise) return low;
       k += dir;
+      if (y[k] < y[low]) low = k;
     }
     return k;
   };
