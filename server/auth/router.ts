@@ -28,7 +28,10 @@ function authLimiter(config: Config): RequestHandler {
 }
 
 export function authRoutes(auth: AuthService, config: Config, ds: DataSource): RouteDef[] {
-  const limiter = authLimiter(config);
+  // Separate budgets: failed sign-ins must not block a password reset, and the other way round.
+  const signInLimiter = authLimiter(config);
+  const registerLimiter = authLimiter(config);
+  const resetLimiter = authLimiter(config);
   return [
     {
       method: 'post',
@@ -36,7 +39,7 @@ export function authRoutes(auth: AuthService, config: Config, ds: DataSource): R
       access: PUBLIC,
       summary: 'SignInBody → SessionResponse (rate-limited)',
       handlers: [
-        limiter,
+        signInLimiter,
         async (req, res) => {
           const body = parseOr400(SignInBodySchema, req.body, 'sign-in');
           res.json(await auth.signIn(body.email, body.password));
@@ -49,7 +52,7 @@ export function authRoutes(auth: AuthService, config: Config, ds: DataSource): R
       access: PUBLIC,
       summary: 'RegisterBody → 201 SessionResponse (rate-limited)',
       handlers: [
-        limiter,
+        registerLimiter,
         async (req, res) => {
           const body = parseOr400(RegisterBodySchema, req.body, 'register');
           res.status(201).json(await auth.register(body));
@@ -99,7 +102,7 @@ export function authRoutes(auth: AuthService, config: Config, ds: DataSource): R
       access: PUBLIC,
       summary: 'PasswordResetRequestBody → 202 OkResponse; e-mails a one-time code (rate-limited)',
       handlers: [
-        limiter,
+        resetLimiter,
         async (req, res) => {
           const body = parseOr400(PasswordResetRequestBodySchema, req.body, 'password-reset');
           await auth.requestPasswordReset(body.email);
@@ -113,7 +116,7 @@ export function authRoutes(auth: AuthService, config: Config, ds: DataSource): R
       access: PUBLIC,
       summary: 'PasswordResetConfirmBody → OkResponse; signs out everywhere (rate-limited)',
       handlers: [
-        limiter,
+        resetLimiter,
         async (req, res) => {
           const body = parseOr400(PasswordResetConfirmBodySchema, req.body, 'password-reset/confirm');
           await auth.confirmPasswordReset(body.token, body.password);
