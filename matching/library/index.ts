@@ -7,3 +7,4 @@ export * from './entryCheckShiftRange';
 export * from './entryCheckMultiplicity';
 export * from './libraryFindNearDuplicates';
 export * from './libraryCheck';
+export * from './entryCheckAgainstLibrary';

@@ -33,7 +33,7 @@ export function smilesCountAtoms(smiles: string): SmilesAtomCounts {
     mol = Molecule.fromSmiles(key);
   } catch (e) {
     const why = String((e as Error).message ?? e).replace(/^Class\$\S+:\s*/, '');
-    throw new RangeError(`smiles "${key}" cannot be read: ${why}`);
+    throw new RangeError(`smiles "${key}" cannot be read: ${why}`, { cause: e });
   }
   const formula = mol.getMolecularFormula().formula;
   let protium = 0;
