@@ -13,3 +13,5 @@ export * from './lineshape';
 export * from './fit';
 export * from './library';
 export * from './quant';
+export * from './confidence';
+export * from './analyse';

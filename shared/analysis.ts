@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ScreenOptionsSchema } from './screening';
 
 const finite = z.number().finite();
 
@@ -11,6 +12,7 @@ export const FitOptionsSchema = z.object({
   cutoff: z.number().positive().max(0.1).optional().describe('a line is evaluated where it exceeds cutoff × its height (default 1e-7)'),
   noiseLevel: z.number().positive().optional().describe('RMS noise of the mixture intensities; default: estimated (spectra) or unknown (peak lists)'),
   unexplainedFraction: z.number().min(0).max(1).optional().describe('a mixture peak is unexplained when the fit reaches less than this fraction of it (default 0.5)'),
+  includeExchangeable: z.boolean().optional().describe('simulate OH/NH signals marked exchangeable too (default false: their position and width vary)'),
 });
 export type FitOptions = z.infer<typeof FitOptionsSchema>;
 
@@ -93,9 +95,10 @@ export const QValueSchema = z.object({
 export type QValue = z.infer<typeof QValueSchema>;
 
 export const AnalysisOptionsSchema = z.object({
+  screen: ScreenOptionsSchema.optional(),
   fit: FitOptionsSchema.optional(),
   standard: InternalStandardSchema.optional(),
-  decoySets: z.number().int().min(1).max(100).optional().describe('decoy copies of the library (default 5)'),
+  decoySets: z.number().int().min(1).max(200).optional().describe('decoy copies of the library (default 20)'),
   seed: z.number().int().optional().describe('seed of the decoy generator (default 1)'),
 });
 export type AnalysisOptions = z.infer<typeof AnalysisOptionsSchema>;

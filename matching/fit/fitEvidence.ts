@@ -12,7 +12,8 @@ export interface Evidence {
  * (SSE with j), divided by c_j²·G_jj: 1 when nobody else can take over its contribution, 0 when
  * other candidates' lines already explain it. coverage = nuclei-weighted share of its signals that
  * the mixture (minus the other candidates) supports, each clipped to [0, 1]. resolvedLines counts
- * the supported lines at least one linewidth apart: one singlet is one line of evidence.
+ * the lines individually supported (mixture minus others ≥ half the model there) that lie at least
+ * one linewidth apart: one singlet is one line of evidence.
  */
 export function fitEvidence(
   design: FitDesign,
@@ -55,7 +56,15 @@ export function fitEvidence(
     const support = model > 0 ? Math.max(0, Math.min(1, cross / model)) : 0;
     covered += nuclei * support;
     weight += nuclei;
-    if (support >= 0.5) supported.push(...sig);
+    // Each line of the pattern has to be there on its own: a doublet with one line on a peak
+    // and the other on empty baseline is one line of evidence, not two.
+    for (const line of sig) {
+      const one = [line];
+      let lineCross = design.dotLY(one);
+      for (let k = 0; k < n; k++) if (k !== j && c[k] > 0) lineCross -= c[k] * design.dotLL(one, lines[k]);
+      const lineModel = c[j] * design.dotLL(one, lines[j]);
+      if (lineModel > 0 && lineCross >= 0.5 * lineModel) supported.push(line);
+    }
   }
   supported.sort((p, q) => p.x - q.x);
   let resolved = 0;

@@ -72,6 +72,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     minShare = 0.005,
     cutoff = 1e-7,
     unexplainedFraction = 0.5,
+    includeExchangeable = false,
   } = parsed.data;
   const freq = nucleusFrequency(nucleus, mixture.mhz);
   const estimate = parsed.data.linewidthHz === undefined ? mixtureEstimateLinewidth(mixture) : null;
@@ -84,7 +85,10 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   for (const entry of candidates) {
     if (seen.has(entry.id)) throw new RangeError(`candidate "${entry.id}" is listed twice`);
     seen.add(entry.id);
-    const raw = entryToLines(entry, nucleus, mixture.mhz);
+    const raw = entryToLines(entry, nucleus, mixture.mhz).filter((l) => {
+      const sig = entry.signals[l.signal];
+      return includeExchangeable || !(sig.nucleus === '1H' && sig.exchangeable);
+    });
     if (raw.length === 0) {
       rejected.push({ entryId: entry.id, name: entry.name, reason: 'no-lines', message: `no ${nucleus} signals to simulate`, share: 0 });
       continue;

@@ -1,0 +1,98 @@
+import { AnalysisOptionsSchema, type AnalysisOptions, type AnalysisReport, type FitComponent } from '../../shared/analysis';
+import { CAUTION_TEXT } from '../../shared/caution';
+import type { LibraryEntry } from '../../shared/libraryEntry';
+import type { Mixture } from '../../shared/mixture';
+import { componentEvidenceScore } from '../confidence/componentEvidenceScore';
+import { libraryToDecoys } from '../confidence/libraryToDecoys';
+import { scoresToQValues } from '../confidence/scoresToQValues';
+import { fitMixture } from '../fit/fitMixture';
+import { fitToAmounts } from '../quant/fitToAmounts';
+import { screenMixture } from '../screen/screenMixture';
+
+/** Shift range of the mixture, ppm: the spectrum axis, or the peaks' span widened by the window. */
+function mixtureRange(mixture: Mixture, tolerance: number): [number, number] {
+  const xs = mixture.kind === 'spectrum' ? mixture.ppm : mixture.peaks.map((p) => p.shift);
+  if (xs.length === 0) throw new RangeError('the mixture has no peaks to analyse');
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const x of xs) { lo = Math.min(lo, x); hi = Math.max(hi, x); }
+  if (mixture.kind === 'peaks') { lo -= tolerance; hi += tolerance; }
+  if (hi - lo < 1) { const mid = (lo + hi) / 2; lo = mid - 0.5; hi = mid + 0.5; }
+  return [lo, hi];
+}
+
+/** Screen the library, fit the screened candidates (plus a named standard), and score the fit. */
+function screenAndFit(mixture: Mixture, entries: LibraryEntry[], options: AnalysisOptions, forced: string[], linewidthHz?: number) {
+  const screen = screenMixture(mixture, entries, options.screen ?? {});
+  const byId = new Map(entries.map((e) => [e.id, e]));
+  const ids = [...new Set([...screen.candidates.map((c) => c.entryId), ...forced.filter((id) => byId.has(id))])];
+  const fit = fitMixture(mixture, ids.map((id) => byId.get(id)!), {
+    tolerancePpm: screen.tolerancePpm,
+    ...options.fit,
+    ...(linewidthHz !== undefined ? { linewidthHz } : {}),
+  });
+  return { screen, ids, fit };
+}
+
+const score = (c: FitComponent) => componentEvidenceScore(c);
+
+/**
+ * The whole analysis: screening → overlay fit → amounts (mole fractions, and concentrations with
+ * an internal standard) → target–decoy q-values. Decoy libraries (options.decoySets, default 20;
+ * seeded by options.seed, default 1) are screened and fitted exactly like the library, with the
+ * linewidth the target fit found; every entry that is not fitted scores 0.
+ */
+export function analyseMixture(mixture: Mixture, library: LibraryEntry[], options: AnalysisOptions = {}): AnalysisReport {
+  const parsed = AnalysisOptionsSchema.safeParse(options);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    throw new RangeError(`analysis option ${issue.path.join('.') || '(root)'}: ${issue.message}`);
+  }
+  const opts = parsed.data;
+  if (!Array.isArray(library) || library.length === 0) throw new RangeError('the library is empty: nothing to analyse against');
+  const warnings: string[] = [];
+  const standard = opts.standard;
+  const standardEntry = standard ? library.find((e) => e.id === standard.entryId) : undefined;
+  if (standard && !standardEntry) throw new RangeError(`internal standard "${standard.entryId}" is not in the library`);
+
+  const targets = screenAndFit(mixture, library, opts, standard ? [standard.entryId] : []);
+  const { fit, screen } = targets;
+  if (standard && standardEntry && !screen.candidates.some((c) => c.entryId === standard.entryId)) {
+    warnings.push(`internal standard "${standard.entryId}" did not pass screening; it was fitted anyway`);
+  }
+  if (standard?.nuclei !== undefined && standardEntry) {
+    const own = fit.components.find((c) => c.entryId === standard.entryId)?.nuclei;
+    if (own !== undefined && own !== standard.nuclei) {
+      warnings.push(`internal standard "${standard.entryId}": ${standard.nuclei} nuclei given, its fitted signals hold ${own}; the given count is used`);
+    }
+  }
+  if (fit.linewidthSource === 'default') warnings.push(`linewidth unknown: ${fit.linewidthHz} Hz assumed`);
+  if (fit.unexplainedPeaks.length > 0) warnings.push(`${fit.unexplainedPeaks.length} mixture peak(s) not explained by any fitted compound`);
+  for (const g of screen.ambiguityGroups) warnings.push(`screening could not tell apart: ${g.members.join(', ')}`);
+  const amounts = fitToAmounts(fit, standard);
+
+  const sets = opts.decoySets ?? 20;
+  const range = mixtureRange(mixture, screen.tolerancePpm);
+  const decoyLibraries = libraryToDecoys(library, { sets, seed: opts.seed ?? 1, range, mhz: mixture.mhz });
+  const decoyScores: number[] = [];
+  for (const decoys of decoyLibraries) {
+    const run = screenAndFit(mixture, decoys, opts, [], fit.linewidthHz);
+    const scored = new Map(run.fit.components.map((c) => [c.entryId, score(c)]));
+    for (const d of decoys) decoyScores.push(scored.get(d.id) ?? 0);
+  }
+  const fitted = new Map(fit.components.map((c) => [c.entryId, score(c)]));
+  const q = scoresToQValues(library.map((e) => ({ id: e.id, score: fitted.get(e.id) ?? 0 })), decoyScores, sets);
+  const qValues = fit.components.map((c) => ({ entryId: c.entryId, score: fitted.get(c.entryId)!, qValue: q.get(c.entryId)! }));
+
+  return {
+    mixtureName: mixture.name,
+    nucleus: mixture.nucleus,
+    screenedCandidates: targets.ids,
+    fit,
+    amounts,
+    qValues,
+    decoySets: sets,
+    warnings,
+    caution: CAUTION_TEXT,
+  };
+}

@@ -1,0 +1,5 @@
+export * from './randomSeeded';
+export * from './entryToDecoy';
+export * from './libraryToDecoys';
+export * from './componentEvidenceScore';
+export * from './scoresToQValues';

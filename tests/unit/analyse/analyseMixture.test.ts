@@ -1,0 +1,92 @@
+// Mixtures synthesised from the published contaminant table (Gottlieb, Kotlyar & Nudelman,
+// J. Org. Chem. 1997, 62, 7512, Table 1; Fulmer et al., Organometallics 2010, 29, 2176, Table 1;
+// CDCl3 column), analysed end to end.
+import { describe, expect, it } from 'vitest';
+import { analyseMixture } from '../../../matching/analyse/analyseMixture';
+import { libraryToDecoys } from '../../../matching/confidence/libraryToDecoys';
+import { CAUTION_TEXT } from '../../../shared/caution';
+import type { LibraryEntry } from '../../../shared/libraryEntry';
+import { contaminantLibrary, synthPeaks, synthSpectrum } from '../fit/contaminantLibrary';
+
+const lib = contaminantLibrary();
+const get = (id: string) => lib.find((e) => e.id === id)!;
+const truth: Record<string, number> = { ethanol: 2, 'ethyl-acetate': 1, acetone: 0.5, 'diethyl-ether': 0.8, triethylamine: 0.3, '2-propanol': 0.4 };
+const parts = Object.entries(truth).map(([id, amount]) => ({ entry: get(id), amount }));
+const T = 60000;
+
+describe('analyseMixture', () => {
+  it('refuses an empty library and an unknown standard', () => {
+    expect(() => analyseMixture(synthPeaks(parts), [])).toThrow('the library is empty: nothing to analyse against');
+    expect(() => analyseMixture(synthPeaks(parts), lib, { standard: { entryId: 'nope', concentrationMM: 1 } })).toThrow('internal standard "nope" is not in the library');
+    expect(() => analyseMixture(synthPeaks(parts), lib, { decoySets: 0 })).toThrow(/^analysis option decoySets:/);
+  });
+
+  it('recovers the composition of a peak list and gives multiplet-confirmed compounds small q-values', () => {
+    const r = analyseMixture(synthPeaks(parts), lib);
+    expect(r.caution).toBe(CAUTION_TEXT);
+    expect(r.fit.components.map((c) => c.entryId).sort()).toEqual(Object.keys(truth).sort());
+    for (const c of r.fit.components) expect(c.amountPerNucleus).toBeCloseTo(truth[c.entryId], 2);
+    const q = new Map(r.qValues.map((x) => [x.entryId, x.qValue]));
+    for (const id of ['ethanol', 'ethyl-acetate', 'diethyl-ether', 'triethylamine', '2-propanol']) expect(q.get(id), id).toBeLessThanOrEqual(0.05);
+    // acetone is one singlet: any unrelated peak could explain it, so its q-value is not small.
+    expect(q.get('acetone')).toBe(1);
+    const total = r.amounts.reduce((s, a) => s + a.moleFraction, 0);
+    expect(total).toBeCloseTo(1, 10);
+    expect(r.amounts.find((a) => a.entryId === 'ethanol')!.moleFraction).toBeCloseTo(2 / 5, 3);
+  }, T);
+
+  it('does not give a small q-value to a candidate supported only by one singlet an unrelated peak explains', () => {
+    // Benzene (7.36 ppm singlet, Gottlieb 1997) is in the mixture but not in the library; an entry
+    // with one singlet near it is all the library offers there.
+    const lookalike: LibraryEntry = { ...get('acetone'), id: 'lookalike', name: 'lookalike', signals: [{ nucleus: '1H', shift: 7.37, multiplicity: 's', j: [], nuclei: 1 }] };
+    const library = [...lib.filter((e) => e.id !== 'benzene'), lookalike];
+    const r = analyseMixture(synthPeaks([...parts, { entry: get('benzene'), amount: 0.5 }]), library);
+    expect(r.fit.components.some((c) => c.entryId === 'lookalike')).toBe(true);
+    expect(r.qValues.find((x) => x.entryId === 'lookalike')!.qValue).toBeGreaterThanOrEqual(0.5);
+  }, T);
+
+  it('does not give a small q-value to a candidate whose signals another candidate’s multiplets already explain', () => {
+    // A doublet on the inner lines of ethyl acetate's OCH2 quartet (4.12 ppm, J 7 Hz) and a singlet
+    // on its CH3CO singlet (2.05 ppm): everything it could explain, ethyl acetate explains.
+    const impostor: LibraryEntry = {
+      ...get('ethyl-acetate'), id: 'impostor', name: 'impostor',
+      signals: [
+        { nucleus: '1H', shift: 4.12, multiplicity: 'd', j: [7], nuclei: 2 },
+        { nucleus: '1H', shift: 2.05, multiplicity: 's', j: [], nuclei: 3 },
+      ],
+    };
+    const r = analyseMixture(synthPeaks(parts), [...lib, impostor]);
+    const q = r.qValues.find((x) => x.entryId === 'impostor');
+    if (q) expect(q.qValue).toBeGreaterThanOrEqual(0.5);
+    else expect(r.fit.rejected.some((x) => x.entryId === 'impostor') || !r.screenedCandidates.includes('impostor')).toBe(true);
+    expect(r.qValues.find((x) => x.entryId === 'ethyl-acetate')!.qValue).toBeLessThanOrEqual(0.05);
+  }, T);
+
+  it('with a library of only decoys, reports no small q-values (calibration sanity)', () => {
+    for (const seed of [5, 6, 7]) {
+      const fakes = libraryToDecoys(lib, { sets: 1, seed, range: [-0.5, 9.5], mhz: 600.13 })[0].map((e) => ({ ...e, id: `fake-${e.id.split('.').pop()}` }));
+      const r = analyseMixture(synthPeaks(parts), fakes, { seed: seed + 100 });
+      for (const q of r.qValues) expect(q.qValue, `${seed} ${q.entryId}`).toBeGreaterThanOrEqual(0.5);
+    }
+  }, T);
+
+  it('gives concentrations through a named internal standard and warns when its nuclei differ', () => {
+    const withStd = [...parts, { entry: get('1-4-dioxane'), amount: 0.25 }];
+    const r = analyseMixture(synthPeaks(withStd), lib, { standard: { entryId: '1-4-dioxane', concentrationMM: 2, nuclei: 4 }, decoySets: 2 });
+    expect(r.warnings).toContain('internal standard "1-4-dioxane": 4 nuclei given, its fitted signals hold 8; the given count is used');
+    // c_A = (I_A/I_S)(N_S/N_A)c_S with I_S over 8 nuclei counted as 4: ethanol (10/2)(4/5)·2 mM = 8 mM.
+    expect(r.amounts.find((a) => a.entryId === 'ethanol')!.concentrationMM).toBeCloseTo(8, 3);
+  }, T);
+
+  it('analyses a spectrum end to end', () => {
+    const four = { ethanol: 2, 'ethyl-acetate': 1, acetone: 0.5, 'diethyl-ether': 0.8 };
+    const mix = synthSpectrum(Object.entries(four).map(([id, amount]) => ({ entry: get(id), amount })), { noise: 0.01, points: 32768 });
+    const r = analyseMixture(mix, lib, { decoySets: 5 });
+    expect(r.fit.kind).toBe('spectrum');
+    for (const [id, amount] of Object.entries(four)) {
+      const c = r.fit.components.find((x) => x.entryId === id);
+      expect(c, id).toBeDefined();
+      expect(Math.abs(c!.amountPerNucleus / amount - 1), id).toBeLessThan(0.05);
+    }
+  }, T);
+});
