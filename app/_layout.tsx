@@ -5,6 +5,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { useFonts, Inter_400Regular, Inter_500Medium, Inter_600SemiBold, Inter_700Bold } from '@expo-google-fonts/inter';
 import { SessionProvider } from '../components/providers/SessionProvider';
+import { SyncProvider } from '../components/providers/SyncProvider';
 import { registerOfflineShell } from '../components/offlineShell';
 
 export { ErrorBoundary } from 'expo-router';
@@ -20,7 +21,9 @@ export default function RootLayout() {
     <SafeAreaProvider>
       <QueryClientProvider client={queryClient}>
         <SessionProvider>
-          <Stack screenOptions={{ headerShown: false }} />
+          <SyncProvider>
+            <Stack screenOptions={{ headerShown: false }} />
+          </SyncProvider>
         </SessionProvider>
       </QueryClientProvider>
     </SafeAreaProvider>

@@ -10,7 +10,12 @@ export interface NavItem {
   label: string;
   /** A short glyph drawn in the bar (our own, text-based). */
   glyph: string;
+  /** Shown in the phone's bottom bar; the others are reached through "More". */
+  phone?: boolean;
 }
+
+/** Where the phone's "More" item leads: a page listing the items that are not in the bar. */
+export const MORE_HREF = '/more';
 
 export interface AppShellProps {
   items: NavItem[];
@@ -26,8 +31,12 @@ export function AppShell({ items, children, footer }: AppShellProps) {
   const router = useRouter();
   const insets = useSafeAreaInsets();
 
-  const nav = items.map((item) => {
-    const active = pathname === item.href || pathname.startsWith(item.href + '/');
+  const isActive = (href: string) => pathname === href || pathname.startsWith(href + '/');
+  const barItems: NavItem[] = wide
+    ? items
+    : [...items.filter((i) => i.phone), { href: MORE_HREF, label: 'More', glyph: '⋯' }];
+  const nav = barItems.map((item) => {
+    const active = item.href === MORE_HREF ? isActive(MORE_HREF) || items.some((i) => !i.phone && isActive(i.href)) : isActive(item.href);
     return (
       <Pressable
         key={item.href}

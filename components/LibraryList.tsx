@@ -1,3 +1,4 @@
+import type React from 'react';
 import { FlatList, Pressable, StyleSheet, Text, View } from 'react-native';
 import type { LibraryEntry } from '../shared/libraryEntry';
 import { useTheme } from '../hooks/useTheme';
@@ -6,9 +7,10 @@ export interface LibraryListProps {
   entries: LibraryEntry[];
   onOpen?(entry: LibraryEntry): void;
   selectedId?: string | null;
+  header?: React.ReactElement;
 }
 
-const CATEGORY_LABEL: Record<LibraryEntry['category'], string> = {
+export const CATEGORY_LABEL: Record<LibraryEntry['category'], string> = {
   demo: 'demo (invented)',
   contaminant: 'solvent / impurity',
   reference: 'reference',
@@ -22,13 +24,14 @@ function nucleiSummary(entry: LibraryEntry): string {
 }
 
 /** The library as rows: name, formula, solvent, category, signal counts. */
-export function LibraryList({ entries, onOpen, selectedId }: LibraryListProps) {
+export function LibraryList({ entries, onOpen, selectedId, header }: LibraryListProps) {
   const t = useTheme();
   return (
     <FlatList
       data={entries}
       keyExtractor={(e) => e.id}
       accessibilityLabel="Library entries"
+      ListHeaderComponent={header}
       contentContainerStyle={styles.list}
       renderItem={({ item }) => (
         <Pressable

@@ -17,6 +17,13 @@ export const palette = {
     plotMixture: '#22303A',
     plotFit: '#B5553C',
     plotResidual: '#8A8F94',
+    plotC1: '#3F7CA6',
+    plotC2: '#5E7A2E',
+    plotC3: '#8C4F9A',
+    plotC4: '#C48A1C',
+    plotC5: '#2E8C82',
+    plotC6: '#9A4A5E',
+    plotSelect: '#B5553C33',
   },
   dark: {
     background: '#161D22',
@@ -34,6 +41,13 @@ export const palette = {
     plotMixture: '#EDE7DC',
     plotFit: '#D9785D',
     plotResidual: '#7D858B',
+    plotC1: '#7FB3D9',
+    plotC2: '#9DBB62',
+    plotC3: '#C49AD1',
+    plotC4: '#E0AE52',
+    plotC5: '#6CC7BC',
+    plotC6: '#D98CA0',
+    plotSelect: '#D9785D44',
   },
 } as const;
 
@@ -53,3 +67,6 @@ export const fontSize = { xs: 12, sm: 14, md: 16, lg: 19, xl: 24, xxl: 30 } as c
 
 /** Width from which the app switches to side navigation and two panes. */
 export const WIDE_BREAKPOINT = 1024;
+
+/** Component traces of the overlay plot take these in turn. */
+export const COMPONENT_COLOUR_KEYS = ['plotC1', 'plotC2', 'plotC3', 'plotC4', 'plotC5', 'plotC6'] as const;

@@ -1,6 +1,7 @@
 import { LibraryEntrySchema, type LibraryEntry } from '../shared/libraryEntry';
 import { getLocalDb } from './dataSource';
 import { LocalLibraryEntry } from './entities/LocalLibraryEntry';
+import { withWriteLock } from './writeLock';
 
 /** Every library entry stored on the device, by name. Rows that no longer parse are skipped. */
 export async function localLibraryList(): Promise<LibraryEntry[]> {
@@ -30,7 +31,7 @@ export async function localLibraryUpsert(entries: LibraryEntry[]): Promise<void>
   if (entries.length === 0) return;
   const db = await getLocalDb();
   const now = new Date().toISOString();
-  await db.transaction(async (m) => {
+  await withWriteLock(() => db.transaction(async (m) => {
     const repo = m.getRepository(LocalLibraryEntry);
     const retired = entries.filter((e) => e.retired).map((e) => e.id);
     if (retired.length) await repo.delete(retired);
@@ -42,5 +43,5 @@ export async function localLibraryUpsert(entries: LibraryEntry[]): Promise<void>
         ),
       );
     }
-  });
+  }));
 }

@@ -1,6 +1,6 @@
-import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
+import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { SessionResponseSchema, type SessionResponse, type SignInBody } from '../../shared/api/auth';
-import { apiRequest } from '../../client/api';
+import { ApiError, apiRequest, type RequestOptions } from '../../client/api';
 import { settingGet, settingSet } from '../../localdb/settings';
 
 const SESSION_KEY = 'session';
@@ -13,6 +13,8 @@ interface SessionState {
   signOut(): Promise<void>;
   /** Replace the tokens after a refresh. */
   update(session: SessionResponse): Promise<void>;
+  /** An API call as the signed-in user; an expired access token is refreshed once and the call repeated. */
+  request<T>(path: string, options?: Omit<RequestOptions, 'token'>): Promise<T>;
 }
 
 const SessionContext = createContext<SessionState | null>(null);
@@ -51,11 +53,44 @@ export function SessionProvider({ children }: { children: ReactNode }) {
   );
 
   const signOut = useCallback(async () => {
+    const current = sessionRef.current;
     await settingSet(SESSION_KEY, null);
     setSession(null);
+    if (current) apiRequest('/api/auth/sign-out', { method: 'POST', token: current.accessToken, body: { refreshToken: current.refreshToken } }).catch(() => undefined);
   }, []);
 
-  const value = useMemo(() => ({ loading, session, signIn, signOut, update }), [loading, session, signIn, signOut, update]);
+  const sessionRef = useRef<SessionResponse | null>(null);
+  sessionRef.current = session;
+  const refreshing = useRef<Promise<SessionResponse> | null>(null);
+
+  const request = useCallback(
+    async <T,>(path: string, options: Omit<RequestOptions, 'token'> = {}): Promise<T> => {
+      const current = sessionRef.current;
+      try {
+        return await apiRequest<T>(path, { ...options, token: current?.accessToken });
+      } catch (err) {
+        if (!(err instanceof ApiError) || err.status !== 401 || !current) throw err;
+        // One refresh at a time: refresh tokens rotate, a second parallel refresh would fail.
+        refreshing.current ??= apiRequest<unknown>('/api/auth/refresh', { method: 'POST', body: { refreshToken: current.refreshToken } })
+          .then((raw) => SessionResponseSchema.parse(raw))
+          .finally(() => {
+            refreshing.current = null;
+          });
+        let next: SessionResponse;
+        try {
+          next = await refreshing.current;
+        } catch (refreshErr) {
+          if (refreshErr instanceof ApiError && refreshErr.status === 401) await signOut();
+          throw refreshErr;
+        }
+        await update(next);
+        return apiRequest<T>(path, { ...options, token: next.accessToken });
+      }
+    },
+    [signOut, update],
+  );
+
+  const value = useMemo(() => ({ loading, session, signIn, signOut, update, request }), [loading, session, signIn, signOut, update, request]);
   return <SessionContext.Provider value={value}>{children}</SessionContext.Provider>;
 }
 

@@ -1,0 +1,47 @@
+import { getLocalDb } from './dataSource';
+import { LocalOutboxItem } from './entities/LocalOutboxItem';
+import { withWriteLock } from './writeLock';
+
+export type OutboxStatus = 'pending' | 'sent' | 'approved' | 'rejected' | 'changes_requested' | 'failed';
+
+export interface OutboxItem {
+  id: string;
+  kind: 'submission';
+  status: OutboxStatus;
+  title: string;
+  body: unknown;
+  serverId: string | null;
+  message: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+function toItem(r: LocalOutboxItem): OutboxItem {
+  return { id: r.id, kind: 'submission', status: r.status as OutboxStatus, title: r.title, body: JSON.parse(r.body), serverId: r.serverId, message: r.message, createdAt: r.createdAt, updatedAt: r.updatedAt };
+}
+
+/** Queue work for the server. Written before any network call, so nothing is lost offline. */
+export async function outboxAdd(item: { id: string; title: string; body: unknown }): Promise<void> {
+  const db = await getLocalDb();
+  const repo = db.getRepository(LocalOutboxItem);
+  const now = new Date().toISOString();
+  const row = repo.create({ id: item.id, kind: 'submission', status: 'pending', title: item.title, body: JSON.stringify(item.body), serverId: null, message: null, createdAt: now, updatedAt: now });
+  await withWriteLock(() => repo.save(row));
+}
+
+export async function outboxList(): Promise<OutboxItem[]> {
+  const db = await getLocalDb();
+  const rows = await db.getRepository(LocalOutboxItem).find({ order: { createdAt: 'DESC' } });
+  return rows.map(toItem);
+}
+
+export async function outboxPending(): Promise<OutboxItem[]> {
+  const db = await getLocalDb();
+  const rows = await db.getRepository(LocalOutboxItem).find({ where: { status: 'pending' }, order: { createdAt: 'ASC' } });
+  return rows.map(toItem);
+}
+
+export async function outboxUpdate(id: string, patch: { status?: OutboxStatus; serverId?: string | null; message?: string | null }): Promise<void> {
+  const db = await getLocalDb();
+  await withWriteLock(() => db.getRepository(LocalOutboxItem).update({ id }, { ...patch, updatedAt: new Date().toISOString() }));
+}
