@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { entryCheckMultiplicity } from '../../../matching/library';
 import { ethanolEntry } from './helpers';
@@ -33,5 +34,19 @@ describe('entryCheckMultiplicity', () => {
       { entryId: 'test:ethanol', field: 'signals[0].multiplicity', check: 'multiplicity', message: 'unknown multiplicity "x" (use s, d, t, q, quint, sext, sept, combinations like dd or dt, m, br s)' },
       { entryId: 'test:ethanol', field: 'signals[1].j', check: 'multiplicity', message: 'multiplicity "dd" has two equal doublet couplings (7 Hz): that is a triplet ("t")' },
     ]);
+  });
+
+  it('accepts any first-order pattern with one distinct J per splitting and rejects one J too few (property)', () => {
+    const letters = ['d', 't', 'q', 'quint', 'sext', 'sept'];
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom(...letters), { minLength: 1, maxLength: 4 }), (parts) => {
+        const multiplicity = parts.join('');
+        const j = parts.map((_, k) => 16 - 3 * k); // distinct couplings, so no "dd" with equal J
+        const ok = ethanolEntry({ signals: [{ nucleus: '1H', shift: 2, multiplicity, j, nuclei: 1 }] });
+        expect(entryCheckMultiplicity(ok)).toEqual([]);
+        const short = ethanolEntry({ signals: [{ nucleus: '1H', shift: 2, multiplicity, j: j.slice(1), nuclei: 1 }] });
+        expect(entryCheckMultiplicity(short).map((p) => p.field)).toEqual(['signals[0].j']);
+      }),
+    );
   });
 });

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { Molecule } from 'openchemlib';
 import { describe, expect, it } from 'vitest';
 import { formulaParse } from '../../../matching/library';
@@ -40,5 +41,15 @@ describe('formulaParse', () => {
       if (h > 0) counted.H = (counted.H ?? 0) + h;
     }
     expect(formulaParse(mol.getMolecularFormula().formula)).toEqual(counted);
+  });
+
+  it('reads back any formula written from element counts (property)', () => {
+    const symbols = ['C', 'H', 'D', 'N', 'O', 'S', 'P', 'F', 'Cl', 'Br', 'Na', 'Si'];
+    fc.assert(
+      fc.property(fc.dictionary(fc.constantFrom(...symbols), fc.integer({ min: 1, max: 60 }), { minKeys: 1 }), (counts) => {
+        const text = Object.entries(counts).map(([el, n]) => (n === 1 ? el : `${el}${n}`)).join('');
+        expect(formulaParse(text)).toEqual(counts);
+      }),
+    );
   });
 });
