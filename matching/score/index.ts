@@ -1,1 +1,2 @@
 export * from './entryScore';
+export * from './multipletsMatchPeaks';

@@ -18,9 +18,10 @@ export interface CandidateRelations {
 /**
  * Ambiguity among ranked candidates. Candidates that explain exactly the same mixture peaks and
  * the same share of their nuclei (±0.01) cannot be told apart by this peak list: they form one
- * group (ids G1, G2, … in rank order of their best member). A candidate whose matched peaks are
- * all matched by another candidate outside its group is possibly shadowed by it: its signals may
- * just be the other compound's multiplets.
+ * group (ids G1, G2, … in rank order of their best member). A candidate is possibly shadowed when
+ * its signals may just be other compounds' multiplets: every peak it matched is matched by one
+ * other candidate outside its group (any rank), or jointly by candidates ranked above it (input
+ * order is rank order). shadowedBy names those candidates.
  */
 export function candidatesRelate(candidates: readonly RelatableCandidate[]): CandidateRelations {
   const groupOf: Array<string | null> = candidates.map(() => null);
@@ -48,20 +49,25 @@ export function candidatesRelate(candidates: readonly RelatableCandidate[]): Can
       else byPeak.set(p, [i]);
     }
   });
+  const outside = (i: number, j: number) => j !== i && (groupOf[i] === null || groupOf[i] !== groupOf[j]);
   const shadowedBy = candidates.map((c, i) => {
     if (c.peaks.length === 0) return [];
-    let common: number[] = byPeak.get(c.peaks[0]) ?? [];
+    // One candidate holding every peak of this one.
+    let common: number[] = (byPeak.get(c.peaks[0]) ?? []).filter((j) => outside(i, j));
     for (const p of c.peaks.slice(1)) {
+      if (common.length === 0) break;
       const here = new Set(byPeak.get(p) ?? []);
       common = common.filter((j) => here.has(j));
-      if (common.length <= 1) break;
     }
-    const out: string[] = [];
-    for (const j of common) {
-      if (j === i || (groupOf[i] !== null && groupOf[i] === groupOf[j])) continue;
-      out.push(candidates[j].entryId);
+    if (common.length > 0) return common.map((j) => candidates[j].entryId);
+    // Several better-ranked candidates holding them together.
+    const above = new Set<number>();
+    for (const p of c.peaks) {
+      const holders = (byPeak.get(p) ?? []).filter((j) => j < i && outside(i, j));
+      if (holders.length === 0) return [];
+      for (const j of holders) above.add(j);
     }
-    return out;
+    return [...above].sort((a, b) => a - b).map((j) => candidates[j].entryId);
   });
   return { groups, groupOf, shadowedBy };
 }
