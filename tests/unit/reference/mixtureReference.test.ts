@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { mixtureReference, mixtureReferenceFind, screenMixture } from '../../../matching';
-import type { PeakListMixture, SpectrumMixture } from '../../../shared/mixture';
+import type { PeakListMixture } from '../../../shared/mixture';
+import { synthSpectrum } from '../../fixtures/screen/synthSpectrum';
 import { tableLibrary } from '../../fixtures/screen/contaminantTable';
 
 const base: PeakListMixture = {
@@ -44,11 +45,10 @@ describe('mixtureReference', () => {
   });
 
   it('references a spectrum axis', () => {
-    const ppm = Array.from({ length: 2001 }, (_, i) => -1 + i * 0.005);
-    const intensity = ppm.map((x) => 100 / (1 + ((x - 0.03) / 0.002) ** 2) + 50 / (1 + ((x - 2.03) / 0.002) ** 2));
-    const s: SpectrumMixture = { kind: 'spectrum', name: 's', nucleus: '1H', solvent: 'CDCl3', mhz: 600, reference: 'TMS', ppm, intensity };
+    const s = synthSpectrum([{ shift: 0.03, height: 100 }, { shift: 2.2, height: 50 }], { from: -1, to: 3, hzPerPoint: 0.4, mhz: 600, widthHz: 1, solvent: 'CDCl3' });
     const r = mixtureReference(s);
-    expect(r.ppm[0]).toBeCloseTo(-1.03, 3);
+    expect(r.ppm[0]).toBeCloseTo(-1.03, 4);
+    expect(r.ppm.length).toBe(s.ppm.length);
   });
 
   // Property from the issue: shifting every peak by the same amount and then referencing gives the
