@@ -77,7 +77,8 @@ export type InternalStandard = z.infer<typeof InternalStandardSchema>;
 export const AmountResultSchema = z.object({
   entryId: z.string(),
   name: z.string(),
-  moleFraction: finite.min(0).max(1).describe('among the fitted compounds (the standard excluded when there is one)'),
+  moleFraction: finite.min(0).max(1).describe('among the fitted compounds in the fractions (0 for those left out)'),
+  inFractions: z.boolean().describe('false for the internal standard and shift-reference compounds'),
   moleFractionUncertainty: finite.nonnegative().nullable(),
   concentrationMM: finite.nonnegative().nullable().describe('qNMR internal-standard equation; null without a standard'),
   concentrationUncertaintyMM: finite.nonnegative().nullable(),
@@ -100,6 +101,7 @@ export const AnalysisOptionsSchema = z.object({
   standard: InternalStandardSchema.optional(),
   decoySets: z.number().int().min(1).max(200).optional().describe('decoy copies of the library (default 20)'),
   seed: z.number().int().optional().describe('seed of the decoy generator (default 1)'),
+  anySolvent: z.boolean().optional().describe('use entries of every solvent (default false: only the mixture’s solvent, and "other")'),
 });
 export type AnalysisOptions = z.infer<typeof AnalysisOptionsSchema>;
 

@@ -5,9 +5,11 @@ export interface CliCommand {
 
 import { screenCommand } from './screen';
 import { batchCommand } from './batch';
+import { analyseCommand } from './analyse';
 
 // Each command registers itself here (one line each).
 export const commands: Record<string, CliCommand> = {
   screen: screenCommand,
   batch: batchCommand,
+  analyse: analyseCommand,
 };

@@ -40,7 +40,9 @@ const score = (c: FitComponent) => componentEvidenceScore(c);
  * The whole analysis: screening → overlay fit → amounts (mole fractions, and concentrations with
  * an internal standard) → target–decoy q-values. Decoy libraries (options.decoySets, default 20;
  * seeded by options.seed, default 1) are screened and fitted exactly like the library, with the
- * linewidth the target fit found; every entry that is not fitted scores 0.
+ * linewidth the target fit found; every entry that is not fitted scores 0. Only entries of the
+ * mixture's solvent are used unless options.anySolvent; shift-reference entries (category
+ * "reference") stay out of the mole fractions.
  */
 export function analyseMixture(mixture: Mixture, library: LibraryEntry[], options: AnalysisOptions = {}): AnalysisReport {
   const parsed = AnalysisOptionsSchema.safeParse(options);
@@ -51,6 +53,13 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
   const opts = parsed.data;
   if (!Array.isArray(library) || library.length === 0) throw new RangeError('the library is empty: nothing to analyse against');
   const warnings: string[] = [];
+  // A library is solvent-specific (shifts move by up to several ppm between solvents: Gottlieb 1997, Fulmer 2010).
+  if (!opts.anySolvent && mixture.solvent !== 'other') {
+    const same = library.filter((e) => e.solvent === mixture.solvent || e.solvent === 'other');
+    if (same.length < library.length) warnings.push(`${library.length - same.length} entries recorded in other solvents than ${mixture.solvent} were left out`);
+    if (same.length === 0) throw new RangeError(`no library entry is recorded in ${mixture.solvent} (or "other")`);
+    library = same;
+  }
   const standard = opts.standard;
   const standardEntry = standard ? library.find((e) => e.id === standard.entryId) : undefined;
   if (standard && !standardEntry) throw new RangeError(`internal standard "${standard.entryId}" is not in the library`);
@@ -69,7 +78,8 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
   if (fit.linewidthSource === 'default') warnings.push(`linewidth unknown: ${fit.linewidthHz} Hz assumed`);
   if (fit.unexplainedPeaks.length > 0) warnings.push(`${fit.unexplainedPeaks.length} mixture peak(s) not explained by any fitted compound`);
   for (const g of screen.ambiguityGroups) warnings.push(`screening could not tell apart: ${g.members.join(', ')}`);
-  const amounts = fitToAmounts(fit, standard);
+  const references = library.filter((e) => e.category === 'reference' && e.id !== standard?.entryId).map((e) => e.id);
+  const amounts = fitToAmounts(fit, standard, { excludeFromFractions: references });
 
   const sets = opts.decoySets ?? 20;
   const range = mixtureRange(mixture, screen.tolerancePpm);

@@ -69,7 +69,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   const {
     tolerancePpm = DEFAULT_TOLERANCE_PPM[nucleus],
     refineShifts = true,
-    minShare = 0.005,
+    minShare = 0.002,
     cutoff = 1e-7,
     unexplainedFraction = 0.5,
     includeExchangeable = false,
@@ -302,8 +302,12 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
         unexplainedPeaks.push({ shift: design.axis[p], intensity: y[p], fitted: fitted[p] });
       }
     }
+    // Noise on a peak top makes several maxima: keep the tallest within two linewidths.
     unexplainedPeaks.sort((p, q) => q.intensity - p.intensity);
-    unexplainedPeaks.splice(200);
+    const apart = (2 * linewidthHz) / freq;
+    const distinct: UnexplainedPeak[] = [];
+    for (const p of unexplainedPeaks) if (distinct.length < 200 && distinct.every((k) => Math.abs(k.shift - p.shift) > apart)) distinct.push(p);
+    unexplainedPeaks.splice(0, unexplainedPeaks.length, ...distinct);
   }
 
   const out = (a: Float64Array) => (prepared ? maybeReverse(a, prepared.reversed) : Array.from(a));

@@ -1,26 +1,33 @@
 import type { AmountResult, FitResult, InternalStandard } from '../../shared/analysis';
 import { qnmrConcentration } from './qnmrConcentration';
 
+export interface FitToAmountsOptions {
+  /** Entry ids kept out of the mole fractions, e.g. shift references (default none). */
+  excludeFromFractions?: string[];
+}
+
 /**
  * Amounts from a fit: mole fractions among the fitted compounds (amounts per nucleus are mole
  * ratios; the internal standard is left out of the fractions), and with an internal standard the
  * concentration of each compound by the qNMR equation c_A = (I_A/I_S)(N_S/N_A)c_S. Uncertainties
  * propagate the fit's standard uncertainties to first order, neglecting their correlations.
  */
-export function fitToAmounts(fit: FitResult, standard?: InternalStandard): AmountResult[] {
+export function fitToAmounts(fit: FitResult, standard?: InternalStandard, options: FitToAmountsOptions = {}): AmountResult[] {
+  const leaveOut = new Set(options.excludeFromFractions ?? []);
   const std = standard ? fit.components.find((c) => c.entryId === standard.entryId) : undefined;
   if (standard && !std) {
     const why = fit.rejected.find((r) => r.entryId === standard.entryId);
     throw new RangeError(`internal standard "${standard.entryId}" was not fitted in the mixture${why ? ` (${why.message})` : ''}`);
   }
-  const analytes = fit.components.filter((c) => c !== std);
+  const analytes = fit.components.filter((c) => c !== std && !leaveOut.has(c.entryId));
   const total = analytes.reduce((s, c) => s + c.amountPerNucleus, 0);
   const nucleiS = standard?.nuclei ?? std?.nuclei;
   return fit.components.map((c) => {
     const isStandard = c === std;
+    const inFractions = analytes.includes(c);
     let moleFraction = 0;
     let moleFractionUncertainty: number | null = null;
-    if (!isStandard && total > 0) {
+    if (inFractions && total > 0) {
       moleFraction = c.amountPerNucleus / total;
       if (analytes.every((a) => a.amountUncertainty !== null)) {
         // ∂x_i/∂a_j = (δ_ij·S − a_i)/S²
@@ -52,6 +59,7 @@ export function fitToAmounts(fit: FitResult, standard?: InternalStandard): Amoun
       entryId: c.entryId,
       name: c.name,
       moleFraction,
+      inFractions,
       moleFractionUncertainty,
       concentrationMM,
       concentrationUncertaintyMM,

@@ -12,7 +12,7 @@ const lib = contaminantLibrary();
 const get = (id: string) => lib.find((e) => e.id === id)!;
 const truth: Record<string, number> = { ethanol: 2, 'ethyl-acetate': 1, acetone: 0.5, 'diethyl-ether': 0.8, triethylamine: 0.3, '2-propanol': 0.4 };
 const parts = Object.entries(truth).map(([id, amount]) => ({ entry: get(id), amount }));
-const T = 60000;
+const T = 120000;
 
 describe('analyseMixture', () => {
   it('refuses an empty library and an unknown standard', () => {

@@ -16,6 +16,7 @@ const get = (id: string) => {
 const truth = { ethanol: 2, 'ethyl-acetate': 1, acetone: 0.5, 'diethyl-ether': 0.8 };
 const parts = Object.entries(truth).map(([id, amount]) => ({ entry: get(id), amount }));
 const offsets = { ethanol: 0.01, 'diethyl-ether': -0.015 };
+const T = 120000; // spectra of up to 65 536 points: allow slow CI machines
 const absent = lib.filter((e) => !(e.id in truth)).map((e) => e.id);
 
 function expectRecovered(mix: Mixture, tolerance: number) {
@@ -38,17 +39,17 @@ describe('fitMixture', () => {
     const mix = synthPeaks(parts);
     expect(() => fitMixture(mix, [get('acetone'), get('acetone')])).toThrow('candidate "acetone" is listed twice');
     expect(() => fitMixture(mix, [get('acetone')], { minShare: 2 })).toThrow(/^fit option minShare:/);
-  });
+  }, T);
   it('rejects a spectrum whose ppm axis is not monotonic, naming the point', () => {
     const mix = synthSpectrum(parts, { points: 2000 });
     if (mix.kind !== 'spectrum') throw new Error('spectrum expected');
     mix.ppm[10] = mix.ppm[8];
     expect(() => fitMixture(mix, lib)).toThrow('mixture ppm axis must be strictly monotonic (at point 10)');
-  });
+  }, T);
   it('reports a candidate without lines in the nucleus as rejected', () => {
     const r = fitMixture({ ...synthPeaks(parts), nucleus: '13C' }, [get('acetone')]);
     expect(r.rejected).toEqual([{ entryId: 'acetone', name: 'acetone', reason: 'no-lines', message: 'no 13C signals to simulate', share: 0 }]);
-  });
+  }, T);
 
   it('recovers amounts within 2 % from a noise-free spectrum, with shift offsets and an estimated linewidth', () => {
     const r = expectRecovered(synthSpectrum(parts, { offsets }), 0.02);
@@ -60,17 +61,17 @@ describe('fitMixture', () => {
     expect(r.fittedSum.length).toBe(r.axis.length);
     expect(r.residual.length).toBe(r.axis.length);
     expect(r.unexplainedPeaks).toEqual([]);
-  });
+  }, T);
   it('recovers amounts within 10 % from a spectrum with 5 % noise (σ = 5 % of the tallest point)', () => {
     // 65 536 points over 10 ppm at 600 MHz = 0.09 Hz/point, finer than the ≤ 0.4 Hz/point that
     // BIPM ISRD-03 (Westwood et al., Rapport BIPM-2018/05) asks for quantitative spectra.
     for (const seed of [1, 2, 3]) expectRecovered(synthSpectrum(parts, { offsets, noise: 0.05, seed, points: 65536 }), 0.1);
-  });
+  }, T);
   it('recovers amounts within 2 % from a peak list with closed-form overlaps', () => {
     const r = expectRecovered(synthPeaks(parts, { offsets }), 0.02);
     expect(r.kind).toBe('peaks');
     expect(r.rSquared).toBeGreaterThan(0.999);
-  });
+  }, T);
   it('gives the same amounts for a descending ppm axis, with curves in the input order', () => {
     const mix = synthSpectrum(parts, { offsets, points: 8192 });
     if (mix.kind !== 'spectrum') throw new Error('spectrum expected');
@@ -79,19 +80,19 @@ describe('fitMixture', () => {
     const b = fitMixture(down, lib, { linewidthHz: 1 });
     expect(b.axis[0]).toBe(down.ppm[0]);
     for (const c of a.components) expect(b.components.find((x) => x.entryId === c.entryId)!.amountPerNucleus).toBeCloseTo(c.amountPerNucleus, 8);
-  });
+  }, T);
   it('lists a mixture peak no candidate explains', () => {
     const mix = synthSpectrum([...parts, { entry: get('benzene'), amount: 0.3 }], { points: 8192 });
     const r = fitMixture(mix, lib.filter((e) => e.id !== 'benzene'), { linewidthHz: 1 });
     expect(r.unexplainedPeaks.length).toBe(1);
     expect(r.unexplainedPeaks[0].shift).toBeCloseTo(7.36, 3); // benzene in CDCl3, Gottlieb 1997 Table 1
-  });
+  }, T);
   it('rejects a candidate below the settable share, with the reason', () => {
     const r = fitMixture(synthPeaks([...parts, { entry: get('methanol'), amount: 0.02 }]), lib, { minShare: 0.01 });
     const m = r.rejected.find((x) => x.entryId === 'methanol');
     expect(m?.reason).toBe('below-share');
     expect(m?.message).toMatch(/below the 1\.0 % threshold$/);
-  });
+  }, T);
   it('gives uncertainties of the size of the scatter over noise realisations', () => {
     const est: number[] = [];
     const unc: number[] = [];
@@ -106,7 +107,7 @@ describe('fitMixture', () => {
     const u = unc.reduce((s, v) => s + v, 0) / unc.length;
     expect(u / sd).toBeGreaterThan(0.4);
     expect(u / sd).toBeLessThan(2.5);
-  });
+  }, T);
   it('flags a compound whose tallest line is below S/N 10 (ICH Q2(R1) quantitation limit, common practice)', () => {
     const weak = [...parts, { entry: get('dichloromethane'), amount: 0.2 }];
     const r = fitMixture(synthSpectrum(weak, { noise: 0.02, seed: 5, points: 8192 }), lib, { linewidthHz: 1, minShare: 0 });
@@ -115,5 +116,5 @@ describe('fitMixture', () => {
     expect(c!.snr).toBeLessThan(10);
     expect(c!.belowQuantitationLimit).toBe(true);
     expect(r.components.find((x) => x.entryId === 'acetone')!.belowQuantitationLimit).toBe(false);
-  });
+  }, T);
 });
