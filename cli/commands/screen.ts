@@ -2,7 +2,8 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
-import { InputError, mixtureParseFile, screenMixture, type MixtureMeta } from '../../matching';
+import { InputError, mixtureParseFile, type MixtureMeta } from '../../matching/io';
+import { screenMixture } from '../../matching/screen';
 import { CAUTION_TEXT } from '../../shared/caution';
 import { LibraryFileSchema, type LibraryEntry } from '../../shared/libraryEntry';
 import { NucleusSchema } from '../../shared/nucleus';

@@ -42,7 +42,7 @@ export function multipletsMatchPeaks(
   intensities: ArrayLike<number>,
   tolerancePpm: number,
   mhz: number,
-  window: PeakWindow = (lo, hi) => [peaksLowerBound(shifts, lo), peaksLowerBound(shifts, hi + Number.EPSILON * Math.max(1, Math.abs(hi)))],
+  window?: PeakWindow,
 ): MultipletPeakMatch[] {
   const tol = tolerancePpm;
   if (!(tol > 0)) throw new RangeError(`tolerancePpm must be positive, got ${tol}`);
@@ -52,8 +52,23 @@ export function multipletsMatchPeaks(
   multiplets.forEach((mult, m) => {
     const L = mult.ppm;
     const n = L.length;
-    const [from, to] = window(L[0] - tol, L[n - 1] + tol);
+    let from: number;
+    let to: number;
+    if (window) [from, to] = window(L[0] - tol, L[n - 1] + tol);
+    else {
+      from = peaksLowerBound(shifts, L[0] - tol);
+      to = from;
+      const hi = L[n - 1] + tol;
+      while (to < shifts.length && shifts[to] <= hi) to++;
+    }
     if (from >= to) return;
+    if (n === 1) {
+      // One line (singlet, unresolved multiplet, 13C): the nearest peak, if within the tolerance.
+      const q = nearest(shifts, from, to, L[0]);
+      const d = Math.abs(shifts[q] - L[0]);
+      if (d <= tol) proposals.push({ m, l: 0, p: q, misfit: d });
+      return;
+    }
     let minGap = Infinity;
     for (let l = 1; l < n; l++) minGap = Math.min(minGap, L[l] - L[l - 1]);
     const lineTol = n > 1 ? Math.min(tol, Math.max(1 / mhz, 0.3 * minGap)) : tol;
@@ -87,13 +102,19 @@ export function multipletsMatchPeaks(
   });
   proposals.sort((a, b) => a.misfit - b.misfit || a.p - b.p || a.m - b.m || a.l - b.l);
   const usedPeak = new Set<number>();
-  const usedLine = new Set<string>();
+  const lineBase: number[] = [];
+  let nLines = 0;
+  for (const mult of multiplets) {
+    lineBase.push(nLines);
+    nLines += mult.ppm.length;
+  }
+  const usedLine = new Uint8Array(nLines);
   const got: Array<Array<{ l: number; p: number }>> = multiplets.map(() => []);
   for (const q of proposals) {
-    const key = `${q.m}:${q.l}`;
-    if (usedPeak.has(q.p) || usedLine.has(key)) continue;
+    const key = lineBase[q.m] + q.l;
+    if (usedPeak.has(q.p) || usedLine[key]) continue;
     usedPeak.add(q.p);
-    usedLine.add(key);
+    usedLine[key] = 1;
     got[q.m].push({ l: q.l, p: q.p });
   }
   return multiplets.map((mult, m) => {

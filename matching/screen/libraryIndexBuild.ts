@@ -1,6 +1,7 @@
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Nucleus } from '../../shared/nucleus';
 import { multipletToLines } from '../multiplets/multipletToLines';
+import type { MultipletLines } from '../score/multipletsMatchPeaks';
 
 /**
  * A library flattened into typed arrays and binned by shift, for one nucleus and one spectrometer
@@ -26,6 +27,8 @@ export interface LibraryIndex {
   lineStart: Int32Array;
   linePpm: Float64Array;
   lineWeight: Float64Array;
+  /** Per signal, its lines as multipletsMatchPeaks takes them (built once, shared by every run). */
+  sigLines: MultipletLines[];
   /** Nuclei of the signals that must be found (all, when an entry is only exchangeable signals). */
   entryRequired: Float64Array;
   binWidth: number;
@@ -100,6 +103,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     maxShift = Math.max(maxShift, sigHi[k]);
   });
   lineStart[S] = l;
+  const sigLines: MultipletLines[] = sigs.map((s) => ({ centre: s.shift, ppm: s.ppm, weight: s.w }));
   for (let e = 0; e < kept.length; e++) {
     let req = 0;
     let all = 0;
@@ -136,6 +140,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     lineStart,
     linePpm,
     lineWeight,
+    sigLines,
     entryRequired,
     binWidth,
     binOrigin,

@@ -16,11 +16,6 @@ export interface SignalMatch {
 export function libraryIndexEntryMatch(index: LibraryIndex, e: number, shifts: Float64Array, intensities: Float64Array, tol: number): SignalMatch[] {
   const s0 = index.sigStart[e];
   const s1 = index.sigStart[e + 1];
-  const multiplets: MultipletLines[] = [];
-  for (let k = s0; k < s1; k++) {
-    const a = index.lineStart[k];
-    const b = index.lineStart[k + 1];
-    multiplets.push({ centre: index.sigShift[k], ppm: index.linePpm.subarray(a, b), weight: index.lineWeight.subarray(a, b) });
-  }
+  const multiplets: MultipletLines[] = index.sigLines.slice(s0, s1);
   return multipletsMatchPeaks(multiplets, shifts, intensities, tol, index.mhz).map((m, i) => ({ signal: s0 + i, ...m }));
 }

@@ -2,7 +2,9 @@
 // scan over all mixture peaks. Same peaks, same line assignment and same score as screenMixture,
 // no shift index and no pruning.
 // It is the baseline the benchmark measures against and the oracle the tests compare with.
-import { entryScore, mixturePeaks, multipletsMatchPeaks, multipletToLines } from '../../../matching';
+import { multipletToLines } from '../../../matching/multiplets/multipletToLines';
+import { mixturePeaks } from '../../../matching/peaks';
+import { entryScore, multipletsMatchPeaks } from '../../../matching/score';
 import type { LibraryEntry } from '../../../shared/libraryEntry';
 import type { Mixture } from '../../../shared/mixture';
 import { DEFAULT_TOLERANCE_PPM } from '../../../shared/nucleus';

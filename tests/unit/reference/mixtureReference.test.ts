@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { mixtureReference, mixtureReferenceFind, screenMixture } from '../../../matching';
+import { mixtureReference, mixtureReferenceFind } from '../../../matching/reference';
+import { screenMixture } from '../../../matching/screen';
 import type { PeakListMixture } from '../../../shared/mixture';
 import { synthSpectrum } from '../../fixtures/screen/synthSpectrum';
 import { tableLibrary } from '../../fixtures/screen/contaminantTable';

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { multipletToLines, screenMixture } from '../../../matching';
+import { multipletToLines } from '../../../matching/multiplets/multipletToLines';
+import { screenMixture } from '../../../matching/screen';
 import { CAUTION_TEXT } from '../../../shared/caution';
 import type { LibraryEntry } from '../../../shared/libraryEntry';
 import type { PeakListMixture } from '../../../shared/mixture';

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { multipletToLines, screenMixture } from '../../../matching';
+import { multipletToLines } from '../../../matching/multiplets/multipletToLines';
+import { screenMixture } from '../../../matching/screen';
 import type { SpectrumMixture } from '../../../shared/mixture';
 import { tableLibrary } from '../../fixtures/screen/contaminantTable';
 import { seededRandom } from '../../fixtures/screen/random';
