@@ -3,7 +3,7 @@ import { anySignedIn, currentUser, roles, type RouteDef } from '../auth/access';
 import type { DataSource } from 'typeorm';
 import { parseOr400, zodIssues } from '../errors/validate';
 import { outcomeToResult, type Proposal, type SubmissionService } from '../submissions/service';
-import { syncChanges } from './service';
+import { syncChangesJson } from './service';
 
 export function syncRoutes(ds: DataSource, submissions: SubmissionService): RouteDef[] {
   return [
@@ -15,7 +15,7 @@ export function syncRoutes(ds: DataSource, submissions: SubmissionService): Rout
       handlers: [
         async (req, res) => {
           const q = parseOr400(SyncChangesQuerySchema, req.query, 'query');
-          res.json(await syncChanges(ds, q.cursor, q.limit));
+          res.type('application/json').send(await syncChangesJson(ds, q.cursor, q.limit));
         },
       ],
     },

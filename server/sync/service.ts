@@ -1,8 +1,5 @@
 import type { DataSource } from 'typeorm';
-import type { SyncChangesResponse } from '../../shared/api/sync';
-import { LibraryEntry } from '../entities/LibraryEntry';
 import { badRequest } from '../errors/AppError';
-import { rowToEntry } from '../library/service';
 
 /** Cursors wrap the library change counter; clients must treat them as opaque strings. */
 export function cursorEncode(seq: number): string {
@@ -16,25 +13,55 @@ export function cursorDecode(cursor: string | undefined): number {
   return Number(m[1]);
 }
 
+interface PageRow {
+  entry_id: string;
+  revision: number;
+  status: 'current' | 'retired';
+  body: string;
+  seq: number;
+}
+
+/** Rendered pages for the library as of one change number; dropped as soon as the library changes. */
+const pageCache = new WeakMap<DataSource, { seq: number; pages: Map<string, string> }>();
+const MAX_CACHED_PAGES = 64;
+
 /**
  * One indexed range query per page: visible revisions (current, or retired = tombstone) whose
  * change number is past the cursor, in change order. An entry changed twice since the cursor
  * appears once, at its latest state, because superseded revisions are not visible.
+ *
+ * Returns the SyncChangesResponse as JSON text. The stored body already is the entry's JSON
+ * (without revision/retired), so it is spliced in rather than parsed and re-serialised, and the
+ * text of a page is kept until the library next changes: many clients pull the same pages.
  */
-export async function syncChanges(ds: DataSource, cursor: string | undefined, limit: number): Promise<SyncChangesResponse> {
+export async function syncChangesJson(ds: DataSource, cursor: string | undefined, limit: number): Promise<string> {
   const after = cursorDecode(cursor);
-  const rows = await ds
-    .getRepository(LibraryEntry)
-    .createQueryBuilder('e')
-    .where("e.status IN ('current', 'retired') AND e.seq > :after", { after })
-    .orderBy('e.seq', 'ASC')
-    .take(limit + 1)
-    .getMany();
+  const [{ s }]: { s: number | null }[] = await ds.query('SELECT MAX("seq") AS s FROM "library_entry"');
+  const seq = s ?? 0;
+  let cache = pageCache.get(ds);
+  if (!cache || cache.seq !== seq) {
+    cache = { seq, pages: new Map() };
+    pageCache.set(ds, cache);
+  }
+  const key = `${after}:${limit}`;
+  const hit = cache.pages.get(key);
+  if (hit !== undefined) return hit;
+
+  const rows: PageRow[] = await ds.query(
+    `SELECT "entry_id", "revision", "status", "body", "seq" FROM "library_entry"
+     WHERE "status" IN ('current', 'retired') AND "seq" > ? ORDER BY "seq" ASC LIMIT ?`,
+    [after, limit + 1],
+  );
   const page = rows.slice(0, limit);
   const last = page.length ? page[page.length - 1].seq : after;
-  return {
-    changes: page.map((r) => ({ entryId: r.entryId, revision: r.revision, retired: r.status === 'retired', entry: rowToEntry(r) })),
-    nextCursor: cursorEncode(last),
-    hasMore: rows.length > limit,
-  };
+  const changes = page.map((r) => {
+    const retired = r.status === 'retired';
+    const head = `{"revision":${r.revision},${retired ? '"retired":true,' : ''}`;
+    const entry = r.body === '{}' ? head.slice(0, -1) + '}' : head + r.body.slice(1);
+    return `{"entryId":${JSON.stringify(r.entry_id)},"revision":${r.revision},"retired":${retired},"entry":${entry}}`;
+  });
+  const json = `{"changes":[${changes.join(',')}],"nextCursor":${JSON.stringify(cursorEncode(last))},"hasMore":${rows.length > limit}}`;
+  if (cache.pages.size >= MAX_CACHED_PAGES) cache.pages.delete(cache.pages.keys().next().value!);
+  cache.pages.set(key, json);
+  return json;
 }

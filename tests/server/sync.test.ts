@@ -126,7 +126,7 @@ describe('sync', () => {
     }
   });
 
-  it('when a pull runs, then it costs one library query however many entries change (no per-entry queries)', async () => {
+  it('when a pull runs, then it costs two library queries however many entries change, and a repeated pull only one', async () => {
     // The better-sqlite3 driver has one query runner; every SQL statement passes its query().
     const runner = s.ds.driver.createQueryRunner('master') as unknown as { query: (...a: unknown[]) => Promise<unknown> };
     const original = runner.query;
@@ -135,12 +135,22 @@ describe('sync', () => {
       seen.push(String(args[0]));
       return original.apply(this, args);
     };
+    let firstPull: string[] = [];
+    let secondBody: unknown;
+    let firstBody: unknown;
     try {
-      const res = await pull(undefined, 1000);
+      const res = await pull(undefined, 999);
+      firstBody = res.body;
       expect(res.body.changes.length).toBeGreaterThan(20);
+      firstPull = seen.splice(0);
+      secondBody = (await pull(undefined, 999)).body;
     } finally {
       runner.query = original;
     }
+    // The library's change number, then the page itself; none per entry.
+    expect(firstPull.filter((q) => /library_entry/.test(q))).toHaveLength(2);
+    // Unchanged library: the rendered page is reused, only the change number is read.
     expect(seen.filter((q) => /library_entry/.test(q))).toHaveLength(1);
+    expect(secondBody).toEqual(firstBody);
   });
 });
