@@ -47,10 +47,15 @@ export function multipletsMatchPeaks(
   const tol = tolerancePpm;
   if (!(tol > 0)) throw new RangeError(`tolerancePpm must be positive, got ${tol}`);
   if (!(mhz > 0)) throw new RangeError(`spectrometer frequency must be positive, got ${mhz}`);
-  type Proposal = { m: number; l: number; p: number; misfit: number };
-  const proposals: Proposal[] = [];
-  multiplets.forEach((mult, m) => {
+  // Proposals (multiplet, line, peak, misfit) in flat arrays: this runs for every candidate entry.
+  const propM: number[] = [];
+  const propL: number[] = [];
+  const propP: number[] = [];
+  const propD: number[] = [];
+  for (let m = 0; m < multiplets.length; m++) {
+    const mult = multiplets[m];
     const L = mult.ppm;
+    const W = mult.weight;
     const n = L.length;
     let from: number;
     let to: number;
@@ -61,85 +66,107 @@ export function multipletsMatchPeaks(
       const hi = L[n - 1] + tol;
       while (to < shifts.length && shifts[to] <= hi) to++;
     }
-    if (from >= to) return;
+    if (from >= to) continue;
     if (n === 1) {
       // One line (singlet, unresolved multiplet, 13C): the nearest peak, if within the tolerance.
       const q = nearest(shifts, from, to, L[0]);
       const d = Math.abs(shifts[q] - L[0]);
-      if (d <= tol) proposals.push({ m, l: 0, p: q, misfit: d });
-      return;
+      if (d <= tol) {
+        propM.push(m);
+        propL.push(0);
+        propP.push(q);
+        propD.push(d);
+      }
+      continue;
     }
     let minGap = Infinity;
     for (let l = 1; l < n; l++) minGap = Math.min(minGap, L[l] - L[l - 1]);
-    const lineTol = n > 1 ? Math.min(tol, Math.max(1 / mhz, 0.3 * minGap)) : tol;
-    let best: { cover: number; misfit: number; offset: number } | null = null;
+    const lineTol = Math.min(tol, Math.max(1 / mhz, 0.3 * minGap));
+    let bestCover = -1;
+    let bestMisfit = Infinity;
+    let bestOffset = 0;
     for (let l = 0; l < n; l++) {
       for (let p = from; p < to; p++) {
         const offset = shifts[p] - L[l];
-        if (Math.abs(offset) > tol) continue;
+        if (offset > tol || offset < -tol) continue;
         let cover = 0;
         let misfit = 0;
         for (let k = 0; k < n; k++) {
-          const q = nearest(shifts, from, to, L[k] + offset);
-          const d = q < 0 ? Infinity : Math.abs(shifts[q] - (L[k] + offset));
+          const target = L[k] + offset;
+          const q = nearest(shifts, from, to, target);
+          const d = Math.abs(shifts[q] - target);
           if (d <= lineTol && Math.abs(shifts[q] - L[k]) <= tol) {
-            cover += mult.weight[k];
+            cover += W[k];
             misfit += d;
           }
         }
-        if (!best || cover > best.cover + 1e-12 || (Math.abs(cover - best.cover) <= 1e-12 && (misfit < best.misfit - 1e-15 || (Math.abs(misfit - best.misfit) <= 1e-15 && Math.abs(offset) < Math.abs(best.offset))))) {
-          best = { cover, misfit, offset };
+        const better =
+          cover > bestCover + 1e-12 ||
+          (Math.abs(cover - bestCover) <= 1e-12 && (misfit < bestMisfit - 1e-15 || (Math.abs(misfit - bestMisfit) <= 1e-15 && Math.abs(offset) < Math.abs(bestOffset))));
+        if (better) {
+          bestCover = cover;
+          bestMisfit = misfit;
+          bestOffset = offset;
         }
       }
     }
-    if (!best) return;
+    if (bestCover < 0) continue;
     for (let k = 0; k < n; k++) {
-      const q = nearest(shifts, from, to, L[k] + best.offset);
-      if (q < 0) continue;
-      const d = Math.abs(shifts[q] - (L[k] + best.offset));
-      if (d <= lineTol && Math.abs(shifts[q] - L[k]) <= tol) proposals.push({ m, l: k, p: q, misfit: d });
-    }
-  });
-  proposals.sort((a, b) => a.misfit - b.misfit || a.p - b.p || a.m - b.m || a.l - b.l);
-  const usedPeak = new Set<number>();
-  const lineBase: number[] = [];
-  let nLines = 0;
-  for (const mult of multiplets) {
-    lineBase.push(nLines);
-    nLines += mult.ppm.length;
-  }
-  const usedLine = new Uint8Array(nLines);
-  const got: Array<Array<{ l: number; p: number }>> = multiplets.map(() => []);
-  for (const q of proposals) {
-    const key = lineBase[q.m] + q.l;
-    if (usedPeak.has(q.p) || usedLine[key]) continue;
-    usedPeak.add(q.p);
-    usedLine[key] = 1;
-    got[q.m].push({ l: q.l, p: q.p });
-  }
-  return multiplets.map((mult, m) => {
-    const hits = got[m];
-    const peaks = hits.map((h) => h.p).sort((a, b) => a - b);
-    const out: MultipletPeakMatch = { peaks, linesMatched: hits.length, linesExpected: mult.ppm.length, deltaPpm: 0, intensity: 0 };
-    if (hits.length === 1) {
-      const p = hits[0].p;
-      const toCentre = shifts[p] - mult.centre;
-      out.deltaPpm = Math.abs(toCentre) <= tol ? toCentre : shifts[p] - mult.ppm[hits[0].l];
-      out.intensity = intensities[p];
-    } else if (hits.length > 1) {
-      let sumI = 0;
-      let sumW = 0;
-      let sumD = 0;
-      for (const h of hits) {
-        sumI += intensities[h.p];
-        sumW += mult.weight[h.l];
-        sumD += shifts[h.p] - mult.ppm[h.l];
+      const target = L[k] + bestOffset;
+      const q = nearest(shifts, from, to, target);
+      const d = Math.abs(shifts[q] - target);
+      if (d <= lineTol && Math.abs(shifts[q] - L[k]) <= tol) {
+        propM.push(m);
+        propL.push(k);
+        propP.push(q);
+        propD.push(d);
       }
-      out.deltaPpm = sumD / hits.length;
-      out.intensity = sumI / sumW;
     }
-    return out;
-  });
+  }
+  const order = propD.map((_, i) => i);
+  if (order.length > 1) order.sort((a, b) => propD[a] - propD[b] || propP[a] - propP[b] || propM[a] - propM[b] || propL[a] - propL[b]);
+  const lineBase = new Int32Array(multiplets.length + 1);
+  for (let m = 0; m < multiplets.length; m++) lineBase[m + 1] = lineBase[m] + multiplets[m].ppm.length;
+  const lineTo = new Int32Array(lineBase[multiplets.length]).fill(-1);
+  const usedPeaks: number[] = [];
+  for (const i of order) {
+    const key = lineBase[propM[i]] + propL[i];
+    if (lineTo[key] >= 0 || usedPeaks.includes(propP[i])) continue;
+    lineTo[key] = propP[i];
+    usedPeaks.push(propP[i]);
+  }
+  const out: MultipletPeakMatch[] = new Array(multiplets.length);
+  for (let m = 0; m < multiplets.length; m++) {
+    const mult = multiplets[m];
+    const peaks: number[] = [];
+    let sumI = 0;
+    let sumW = 0;
+    let sumD = 0;
+    let single = -1;
+    let singleLine = -1;
+    for (let k = 0; k < mult.ppm.length; k++) {
+      const p = lineTo[lineBase[m] + k];
+      if (p < 0) continue;
+      peaks.push(p);
+      sumI += intensities[p];
+      sumW += mult.weight[k];
+      sumD += shifts[p] - mult.ppm[k];
+      single = p;
+      singleLine = k;
+    }
+    const r: MultipletPeakMatch = { peaks, linesMatched: peaks.length, linesExpected: mult.ppm.length, deltaPpm: 0, intensity: 0 };
+    if (peaks.length === 1) {
+      const toCentre = shifts[single] - mult.centre;
+      r.deltaPpm = Math.abs(toCentre) <= tol ? toCentre : shifts[single] - mult.ppm[singleLine];
+      r.intensity = intensities[single];
+    } else if (peaks.length > 1) {
+      peaks.sort((a, b) => a - b);
+      r.deltaPpm = sumD / peaks.length;
+      r.intensity = sumI / sumW;
+    }
+    out[m] = r;
+  }
+  return out;
 }
 
 /** Index in [from, to) of the shift closest to v, or −1 for an empty range. */

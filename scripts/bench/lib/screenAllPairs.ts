@@ -13,8 +13,8 @@ export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], option
   const tol = options.tolerancePpm ?? DEFAULT_TOLERANCE_PPM[mixture.nucleus];
   const minScore = options.minScore ?? 0.5;
   const set = mixturePeaks(mixture, { tolerancePpm: tol });
-  const shifts = set.used.map((p) => p.shift);
-  const intensities = set.used.map((p) => p.intensity);
+  const shifts = Float64Array.from(set.used, (p) => p.shift);
+  const intensities = Float64Array.from(set.used, (p) => p.intensity);
   const hidden = (x: number) => set.regions.some((r) => x >= r.from && x <= r.to);
   const out: Array<{ entryId: string; score: number; explained: number }> = [];
   for (const entry of entries) {
@@ -23,7 +23,7 @@ export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], option
     if (signals.length === 0) continue;
     const multiplets = signals.map((s) => {
       const sim = s.nucleus === '1H' ? multipletToLines(s, mixture.mhz) : [{ shift: s.shift, area: s.nuclei }];
-      return { centre: s.shift, ppm: sim.map((l) => l.shift), weight: sim.map((l) => l.area / s.nuclei) };
+      return { centre: s.shift, ppm: Float64Array.from(sim, (l) => l.shift), weight: Float64Array.from(sim, (l) => l.area / s.nuclei) };
     });
     // Linear scan over every peak instead of a binary search: the all-pairs part.
     const linear = (lo: number, hi: number): [number, number] => {
