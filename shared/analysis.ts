@@ -9,7 +9,7 @@ export const FitOptionsSchema = z.object({
   tolerancePpm: z.number().nonnegative().max(1).optional().describe('largest common shift offset per candidate, ppm; default DEFAULT_TOLERANCE_PPM of the nucleus'),
   refineShifts: z.boolean().optional().describe('search a common shift offset per candidate (default true)'),
   minShare: z.number().min(0).max(1).optional().describe('candidates explaining less than this share of the mixture intensity are rejected (default 0.002)'),
-  cutoff: z.number().positive().max(0.1).optional().describe('a line is evaluated where it exceeds cutoff × its height (default 1e-7)'),
+  cutoff: z.number().positive().max(0.1).optional().describe('a spectrum column is evaluated where a line exceeds cutoff × its height (default 1e-9: Lorentzian tails are long; larger values trade precision for speed)'),
   noiseLevel: z.number().positive().optional().describe('RMS noise of the mixture intensities; default: estimated (spectra) or unknown (peak lists)'),
   unexplainedFraction: z.number().min(0).max(1).optional().describe('a mixture peak is unexplained when the fit reaches less than this fraction of it (default 0.5)'),
   includeExchangeable: z.boolean().optional().describe('simulate OH/NH signals marked exchangeable too (default false: their position and width vary)'),

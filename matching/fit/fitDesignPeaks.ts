@@ -1,3 +1,4 @@
+import { lorentzianFct } from 'ml-peak-shape-generator';
 import { lorentzianOverlap } from '../lineshape/lorentzianOverlap';
 import { lorentzianReach } from '../lineshape/lorentzianReach';
 import { lorentzianUnitArea } from '../lineshape/lorentzianUnitArea';
@@ -36,7 +37,14 @@ export function fitDesignPeaks(peaks: FitLine[], span: [number, number], toleran
   for (let i = 0; i < n; i++) axis[i] = lo + i * step;
   const curve = (lines: FitLine[]): Float64Array => {
     const out = new Float64Array(n);
-    for (const l of lines) for (let i = 0; i < n; i++) out[i] += l.a * lorentzianUnitArea(axis[i] - l.x, l.w);
+    // Display curves only: tails below 1e-9 of a line's height are left out.
+    for (const l of lines) {
+      const height = l.a * lorentzianUnitArea(0, l.w);
+      const r = lorentzianReach(l.w, 1e-9);
+      const i0 = Math.max(0, Math.floor((l.x - r - lo) / step));
+      const i1 = Math.min(n, Math.ceil((l.x + r - lo) / step) + 1);
+      for (let i = i0; i < i1; i++) out[i] += height * lorentzianFct(axis[i] - l.x, l.w);
+    }
     return out;
   };
   const near = (x: number, reach: number, list: FitLine[]): FitLine[] => list.filter((p) => Math.abs(p.x - x) <= reach);
@@ -53,6 +61,11 @@ export function fitDesignPeaks(peaks: FitLine[], span: [number, number], toleran
     dotLY: (A) => lineSum(A, sorted),
     modelIntensity: (lines) => lines.reduce((s, l) => s + l.a, 0),
     curve,
+    mixtureAt: (x) => {
+      let v = 0;
+      for (const p of sorted) v += p.a * lorentzianUnitArea(x - p.x, p.w);
+      return v;
+    },
     profile: (lines, offsets, others) => {
       const g = new Float64Array(offsets.length);
       const otherLines: FitLine[] = [];

@@ -1,4 +1,5 @@
 import { lorentzianReach } from '../lineshape/lorentzianReach';
+import { lorentzianFct } from 'ml-peak-shape-generator';
 import { lorentzianUnitArea } from '../lineshape/lorentzianUnitArea';
 import type { FitDesign, FitLine } from './fitTypes';
 
@@ -51,7 +52,8 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
       const values = new Float64Array(s.hi - s.lo);
       for (const q of s.members) {
         const { x, a, w } = q.l;
-        for (let i = q.lo; i < q.hi; i++) values[i - s.lo] += a * lorentzianUnitArea(axis[i] - x, w);
+        const height = a * lorentzianUnitArea(0, w);
+        for (let i = q.lo; i < q.hi; i++) values[i - s.lo] += height * lorentzianFct(axis[i] - x, w);
       }
       return { start: s.lo, values };
     });
@@ -94,6 +96,11 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
     residualSamples: n,
     gridScale: 1,
     dotLL: (A, B) => dotSegs(column(A), column(B)),
+    dotLV: (A, v) => {
+      let s = 0;
+      for (const seg of column(A)) for (let i = 0; i < seg.values.length; i++) s += seg.values[i] * v[seg.start + i];
+      return s;
+    },
     dotLY: (A) => {
       let s = 0;
       for (const seg of column(A)) for (let i = 0; i < seg.values.length; i++) s += seg.values[i] * y[seg.start + i];
@@ -105,6 +112,13 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
       return s;
     },
     curve,
+    mixtureAt: (x) => {
+      const i = lowerBound(axis, x);
+      if (i <= 0) return y[0];
+      if (i >= n) return y[n - 1];
+      const t = (x - axis[i - 1]) / (axis[i] - axis[i - 1]);
+      return y[i - 1] + t * (y[i] - y[i - 1]);
+    },
     profile: (lines, offsets, others) => {
       const R = Float64Array.from(y);
       for (const o of others) {
@@ -117,8 +131,9 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
         for (const l of lines) {
           const r = lorentzianReach(l.w, SEARCH_CUTOFF);
           const c = l.x + d;
+          const height = l.a * lorentzianUnitArea(0, l.w);
           const hi = lowerBound(axis, c + r);
-          for (let i = lowerBound(axis, c - r); i < hi; i++) s += l.a * lorentzianUnitArea(axis[i] - c, l.w) * R[i];
+          for (let i = lowerBound(axis, c - r); i < hi; i++) s += height * lorentzianFct(axis[i] - c, l.w) * R[i];
         }
         g[k] = s;
       });

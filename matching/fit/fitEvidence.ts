@@ -1,5 +1,5 @@
 import { nnlsSolve } from './nnlsSolve';
-import type { FitDesign, FitLine } from './fitTypes';
+import { linesAt, type FitDesign, type FitLine } from './fitTypes';
 
 export interface Evidence {
   uniqueness: number;
@@ -12,7 +12,7 @@ export interface Evidence {
  * (SSE with j), divided by c_j²·G_jj: 1 when nobody else can take over its contribution, 0 when
  * other candidates' lines already explain it. coverage = nuclei-weighted share of its signals that
  * the mixture (minus the other candidates) supports, each clipped to [0, 1]. resolvedLines counts
- * the lines individually supported (mixture minus others ≥ half the model there) that lie at least
+ * the lines individually supported (mixture minus others ≥ half the model at the line centre) that lie at least
  * one linewidth apart: one singlet is one line of evidence.
  */
 export function fitEvidence(
@@ -23,6 +23,9 @@ export function fitEvidence(
   lines: FitLine[][],
   signals: FitLine[][][],
   j: number,
+  fitted?: Float64Array,
+  rough: FitDesign = design,
+  ownCurve?: Float64Array,
 ): Evidence {
   const n = c.length;
   if (!(c[j] > 0)) return { uniqueness: 0, coverage: 0, resolvedLines: 0 };
@@ -37,33 +40,44 @@ export function fitEvidence(
     return s;
   };
   const all = [...Array(n).keys()];
-  const rest = all.filter((k) => k !== j);
+  const others = all.filter((k) => k !== j);
   const sub = nnlsSolve(
-    rest.map((p) => Float64Array.from(rest.map((q) => G[p][q]))),
-    Float64Array.from(rest.map((p) => h[p])),
+    others.map((p) => Float64Array.from(others.map((q) => G[p][q]))),
+    Float64Array.from(others.map((p) => h[p])),
   ).x;
-  const gain = sse(sub, rest) - sse(c, all);
+  const gain = sse(sub, others) - sse(c, all);
   const own = c[j] * c[j] * G[j][j];
   const uniqueness = own > 0 ? Math.max(0, Math.min(1, gain / own)) : 0;
   let covered = 0;
   let weight = 0;
   const supported: FitLine[] = [];
+  // On a grid, the mixture minus the other candidates is one vector: one pass per signal.
+  let rest: Float64Array | null = null;
+  if (rough.dotLV && fitted && ownCurve) {
+    rest = Float64Array.from(design.mixtureCurve);
+    for (let i = 0; i < rest.length; i++) rest[i] -= fitted[i] - ownCurve[i];
+  }
   for (const sig of signals[j]) {
     const nuclei = sig.reduce((s, l) => s + l.a, 0);
-    let cross = design.dotLY(sig);
-    for (let k = 0; k < n; k++) if (k !== j && c[k] > 0) cross -= c[k] * design.dotLL(sig, lines[k]);
-    const model = c[j] * design.dotLL(sig, lines[j]);
+    let cross: number;
+    // Coverage is a coarse measure: the shorter-tailed design `rough` is precise enough for it.
+    if (rest) cross = rough.dotLV!(sig, rest);
+    else {
+      cross = design.dotLY(sig);
+      for (let k = 0; k < n; k++) if (k !== j && c[k] > 0) cross -= c[k] * design.dotLL(sig, lines[k]);
+    }
+    const model = c[j] * (rest ? rough.dotLL(sig, lines[j]) : design.dotLL(sig, lines[j]));
     const support = model > 0 ? Math.max(0, Math.min(1, cross / model)) : 0;
     covered += nuclei * support;
     weight += nuclei;
     // Each line of the pattern has to be there on its own: a doublet with one line on a peak
     // and the other on empty baseline is one line of evidence, not two.
+    // Checked at the line's centre: the mixture minus the other candidates there.
     for (const line of sig) {
-      const one = [line];
-      let lineCross = design.dotLY(one);
-      for (let k = 0; k < n; k++) if (k !== j && c[k] > 0) lineCross -= c[k] * design.dotLL(one, lines[k]);
-      const lineModel = c[j] * design.dotLL(one, lines[j]);
-      if (lineModel > 0 && lineCross >= 0.5 * lineModel) supported.push(line);
+      let here = design.mixtureAt(line.x);
+      for (let k = 0; k < n; k++) if (k !== j && c[k] > 0) here -= c[k] * linesAt(lines[k], line.x);
+      const own = c[j] * linesAt(lines[j], line.x);
+      if (own > 0 && here >= 0.5 * own) supported.push(line);
     }
   }
   supported.sort((p, q) => p.x - q.x);

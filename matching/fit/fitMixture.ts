@@ -10,7 +10,7 @@ import { fitDesignSpectrum } from './fitDesignSpectrum';
 import { fitEvidence } from './fitEvidence';
 import { fitNormalEquations } from './fitNormalEquations';
 import { fitSearchOffsets } from './fitSearchOffsets';
-import { shiftLines, type FitDesign, type FitLine } from './fitTypes';
+import { shiftLines, toPlainArray, type FitDesign, type FitLine } from './fitTypes';
 import { intensityNoiseLevel } from './intensityNoiseLevel';
 import { nnlsSolve } from './nnlsSolve';
 import { spdSolve } from './spdSolve';
@@ -49,7 +49,7 @@ function prepareSpectrum(ppm: number[], intensity: number[]): Prepared {
 }
 
 function maybeReverse(a: Float64Array, reversed: boolean): number[] {
-  const out = Array.from(a);
+  const out = toPlainArray(a);
   return reversed ? out.reverse() : out;
 }
 
@@ -70,7 +70,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     tolerancePpm = DEFAULT_TOLERANCE_PPM[nucleus],
     refineShifts = true,
     minShare = 0.002,
-    cutoff = 1e-7,
+    cutoff = 1e-9,
     unexplainedFraction = 0.5,
     includeExchangeable = false,
   } = parsed.data;
@@ -132,13 +132,17 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   let current = base;
   // Offsets and the linewidth are located on a design with shorter line tails (cheaper); the
   // amounts reported come from the exact design.
-  const rough = prepared ? fitDesignSpectrum(prepared.axis, prepared.y, Math.max(cutoff, SEARCH_DESIGN_CUTOFF)) : design;
+  let roughDesign: FitDesign | null = null;
+  const rough = (): FitDesign => {
+    roughDesign ??= prepared ? fitDesignSpectrum(prepared.axis, prepared.y, Math.max(cutoff, SEARCH_DESIGN_CUTOFF)) : design;
+    return roughDesign;
+  };
   const search = (rounds: number) => {
     if (!refineShifts || tolerancePpm <= 0 || kept.length === 0) return;
     const minW = Math.min(...base.flatMap((k) => k.map((l) => l.w)));
     const gridStep = prepared ? (prepared.axis[prepared.axis.length - 1] - prepared.axis[0]) / (prepared.axis.length - 1) : 0;
     const step = Math.max(minW / 4, gridStep / 2, tolerancePpm / 400);
-    const found = fitSearchOffsets(rough, base, tolerancePpm, step, rounds);
+    const found = fitSearchOffsets(rough(), base, tolerancePpm, step, rounds);
     offsets = found.offsets;
     current = found.lines;
   };
@@ -181,14 +185,15 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   // the residual, with only the candidates that survive a
   // first solve (spurious ones fitting noise would pull the width down), then re-search offsets.
   if (mixture.kind === 'spectrum' && parsed.data.linewidthHz === undefined && kept.length > 0) {
-    const survivors = solveAndReject(rough, false);
+    const r = rough();
+    const survivors = solveAndReject(r, false);
     if (survivors.length > 0) {
       const sseAt = (widthHz: number) => {
         const all = linesAt(widthHz);
         const lines = survivors.map((i) => shiftLines(all[i], offsets[i]));
-        const ne = fitNormalEquations(rough, lines);
+        const ne = fitNormalEquations(r, lines);
         const x = nnlsSolve(ne.G, ne.h).x;
-        let v = rough.yy;
+        let v = r.yy;
         for (let a = 0; a < x.length; a++) {
           v -= 2 * ne.h[a] * x[a];
           for (let b = 0; b < x.length; b++) v += x[a] * ne.G[a][b] * x[b];
@@ -257,7 +262,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   const activeSignals = active.map((i) => allSignals[i]);
   const components: FitComponent[] = active.map((i, a) => {
     const { entry, nuclei } = kept[i];
-    const ev = fitEvidence(design, G, h, c, active.map((k) => current[k]), activeSignals, a);
+    const ev = fitEvidence(design, G, h, c, active.map((k) => current[k]), activeSignals, a, fitted, rough(), curves[a]);
     const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
     const share = totalExplained > 0 ? Math.min(1, (c[a] * design.modelIntensity(current[i])) / totalExplained) : 0;
     return {
@@ -274,7 +279,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
       resolvedLines: ev.resolvedLines,
       snr,
       belowQuantitationLimit: snr !== null && snr < QUANTITATION_SNR,
-      curve: prepared ? maybeReverse(curves[a], prepared.reversed) : Array.from(curves[a]),
+      curve: prepared ? maybeReverse(curves[a], prepared.reversed) : toPlainArray(curves[a]),
     };
   });
 
@@ -310,7 +315,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     unexplainedPeaks.splice(0, unexplainedPeaks.length, ...distinct);
   }
 
-  const out = (a: Float64Array) => (prepared ? maybeReverse(a, prepared.reversed) : Array.from(a));
+  const out = (a: Float64Array) => (prepared ? maybeReverse(a, prepared.reversed) : toPlainArray(a));
   return {
     kind: mixture.kind,
     linewidthHz,

@@ -16,6 +16,10 @@ export interface FitDesign {
   dotLY(A: FitLine[]): number;
   /** g(δ) = ⟨r(δ), y − Σ c_k r_k⟩ for each offset δ (ppm), the others fixed; approximate (search only). */
   profile(lines: FitLine[], offsets: number[], others: { lines: FitLine[]; c: number }[]): Float64Array;
+  /** The mixture at shift x (interpolated on a grid, exact for a peak list). */
+  mixtureAt(x: number): number;
+  /** ⟨r_A, v⟩ for a vector v on the axis (spectrum designs only: there the axis is the data grid). */
+  dotLV?(A: FitLine[], v: Float64Array): number;
   /** Model curve of `lines` on the axis. */
   curve(lines: FitLine[]): Float64Array;
   /** ppm axis (ascending) and the mixture on it. */
@@ -31,4 +35,21 @@ export interface FitDesign {
 
 export function shiftLines(lines: FitLine[], delta: number): FitLine[] {
   return delta === 0 ? lines : lines.map((l) => ({ x: l.x + delta, a: l.a, w: l.w }));
+}
+
+/** Σ a·L(x − x_l) of a set of lines at one shift (unit-area Lorentzians). */
+export function linesAt(lines: FitLine[], x: number): number {
+  let v = 0;
+  for (const l of lines) {
+    const d = x - l.x;
+    v += (2 * l.a * l.w) / (Math.PI * (4 * d * d + l.w * l.w));
+  }
+  return v;
+}
+
+/** Copies a typed array into a plain array (JSON output) faster than Array.from. */
+export function toPlainArray(a: Float64Array): number[] {
+  const out = new Array<number>(a.length);
+  for (let i = 0; i < a.length; i++) out[i] = a[i];
+  return out;
 }
