@@ -2,7 +2,17 @@
 // back to the cached copy. API calls are never cached here: the app's local database holds data.
 const CACHE = 'tessera-shell-v1';
 
-self.addEventListener('install', () => self.skipWaiting());
+// Everything the web export holds (list written by scripts/buildWeb.mjs) is cached at install, so
+// one visit is enough for the app to start with the server down.
+self.addEventListener('install', (event) => {
+  event.waitUntil(
+    fetch('/precache.json', { cache: 'no-store' })
+      .then((res) => (res.ok ? res.json() : { files: [] }))
+      .then(({ files }) => caches.open(CACHE).then((cache) => Promise.all(files.map((f) => cache.add(f).catch(() => undefined)))))
+      .catch(() => undefined)
+      .then(() => self.skipWaiting()),
+  );
+});
 self.addEventListener('activate', (event) => event.waitUntil(self.clients.claim()));
 
 function cacheable(url) {
@@ -13,10 +23,23 @@ function cacheable(url) {
 self.addEventListener('message', (event) => {
   const data = event.data || {};
   if (data.type !== 'cache-urls' || !Array.isArray(data.urls)) return;
+  const urls = [...new Set(data.urls.filter(cacheable))];
   event.waitUntil(
-    caches.open(CACHE).then((cache) =>
-      Promise.all(data.urls.filter(cacheable).map((url) => cache.add(url).catch(() => undefined))),
-    ),
+    caches
+      .open(CACHE)
+      .then((cache) =>
+        Promise.all(
+          urls.map(async (url) => {
+            // Already kept by the fetch handler? Then no second download.
+            if (await cache.match(url, { ignoreVary: true })) return true;
+            return cache.add(url).then(() => true, () => false);
+          }),
+        ),
+      )
+      .then((results) => {
+        const cached = results.filter(Boolean).length;
+        if (event.source) event.source.postMessage({ type: 'cached', cached, requested: urls.length });
+      }),
   );
 });
 
