@@ -16,7 +16,6 @@ interface Sqlite {
   pragma(sql: string): unknown;
   close(): void;
 }
-// eslint-disable-next-line @typescript-eslint/no-require-imports
 const Database = require('better-sqlite3') as new (file: string, options?: { readonly?: boolean }) => Sqlite;
 
 const ROUNDS = Number(process.argv[2] ?? 50);
@@ -44,7 +43,7 @@ async function main(): Promise<void> {
   const db = path.join(dir, 'durability.sqlite');
   const env = { DATABASE_PATH: db, WEB_DIR: path.join(dir, 'none'), JWT_SECRET: crypto.randomBytes(32).toString('hex') };
   const acknowledged = new Set<string>();
-  let unanswered: { id: string; entry: ReturnType<typeof demoEntry> }[] = [];
+  const unanswered: { id: string; entry: ReturnType<typeof demoEntry> }[] = [];
   let next = 0;
   let pushes = 0;
   let failedPushes = 0;

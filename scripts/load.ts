@@ -11,7 +11,6 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { buildServer, exited, freePort, ROOT, signInAs, startServer, tempDir } from '../tests/server/support/serverProcess';
 
-// eslint-disable-next-line @typescript-eslint/no-require-imports
 const autocannon = require('autocannon') as (opts: Record<string, unknown>) => Promise<AutocannonResult>;
 
 interface AutocannonResult {

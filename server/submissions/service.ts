@@ -4,7 +4,6 @@ import type { Logger } from 'pino';
 import type { SubmissionKind, SubmissionSource, SubmissionSummary, SubmissionView } from '../../shared/api/submissions';
 import type { SyncPushResult } from '../../shared/api/sync';
 import type { LibraryEntry as EntryBody } from '../../shared/libraryEntry';
-import { audit } from '../admin/audit';
 import type { AuthUser } from '../auth/access';
 import type { Config } from '../config';
 import { tx } from '../data-source';

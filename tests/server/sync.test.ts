@@ -135,7 +135,7 @@ describe('sync', () => {
       seen.push(String(args[0]));
       return original.apply(this, args);
     };
-    let firstPull: string[] = [];
+    let firstPull: string[];
     let secondBody: unknown;
     let firstBody: unknown;
     try {
