@@ -31,11 +31,12 @@ export function analysisMixture(input: AnalysisInput): Mixture {
   const s = input.settings;
   if (/\.json$/i.test(input.fileName)) return mixtureFromJson(input);
   return mixtureParseFile(input.fileName, input.content, {
-    name: input.name,
+    // An undefined key would override the name the reader takes from the file name.
+    ...(input.name ? { name: input.name } : {}),
+    ...(input.demo ? { demo: true } : {}),
     nucleus: s.nucleus,
     solvent: s.solvent,
     mhz: s.mhz,
-    demo: input.demo || undefined,
   });
 }
 

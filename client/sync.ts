@@ -6,7 +6,8 @@ import type { RequestOptions } from './api';
 import { ApiError, OfflineError } from './api';
 import { localLibraryUpsert } from '../localdb/library';
 import { snapshotLoadIfEmpty } from '../localdb/snapshot';
-import { outboxList, outboxPending, outboxUpdate } from '../localdb/outbox';
+import { outboxList, outboxPending, outboxUpdate, type OutboxItem } from '../localdb/outbox';
+import { SubmissionResponseSchema } from '../shared/api/submissions';
 import { settingGet, settingSet } from '../localdb/settings';
 
 export type Request = <T>(path: string, options?: Omit<RequestOptions, 'token'>) => Promise<T>;
@@ -51,7 +52,13 @@ export async function syncRun(request: Request, role: Role, onProgress: (p: Sync
 
   if (roleCanSubmit(role)) {
     onProgress({ ...progress });
-    const pending = await outboxPending();
+    const all = await outboxPending();
+    const pending = all.filter((i) => i.kind === 'submission');
+    for (const item of all.filter((i) => i.kind === 'upload')) {
+      if (await uploadPush(request, item)) progress.pushed += 1;
+      else refused += 1;
+      onProgress({ ...progress });
+    }
     for (let i = 0; i < pending.length; i += 50) {
       const batch = pending.slice(i, i + 50);
       const res = SyncPushResponseSchema.parse(
@@ -120,4 +127,33 @@ export async function syncRun(request: Request, role: Role, onProgress: (p: Sync
 
 export function isOfflineError(err: unknown): boolean {
   return err instanceof OfflineError;
+}
+
+export interface UploadBody {
+  fileName: string;
+  content: string;
+  meta: Record<string, unknown>;
+}
+
+/**
+ * A file submission goes as multipart form data. The item id travels in meta.id, so a repeat
+ * after a lost answer returns the stored submission instead of a second one. Offline errors
+ * propagate (the item stays pending); a refusal is recorded on the item.
+ */
+async function uploadPush(request: Request, item: OutboxItem): Promise<boolean> {
+  const body = item.body as UploadBody;
+  const form = new FormData();
+  form.append('meta', JSON.stringify({ ...body.meta, id: item.id }));
+  form.append('file', new Blob([body.content], { type: 'text/plain' }), body.fileName);
+  try {
+    const res = SubmissionResponseSchema.parse(await request<unknown>('/api/submissions/upload', { method: 'POST', body: form }));
+    await outboxUpdate(item.id, { status: res.submission.status === 'pending' ? 'sent' : res.submission.status, serverId: res.submission.id, message: null });
+    return true;
+  } catch (err) {
+    if (!(err instanceof ApiError) || err.status === 401) throw err;
+    const issues = (err.details as { issues?: Array<{ line?: number; field?: string; message: string }> } | undefined)?.issues ?? [];
+    const where = issues.map((x) => `${x.line !== undefined ? `line ${x.line}` : (x.field ?? '')}: ${x.message}`).join(' · ');
+    await outboxUpdate(item.id, { status: 'failed', message: `Refused: ${err.message}${where ? ` · ${where}` : ''}` });
+    return false;
+  }
 }

@@ -6,7 +6,8 @@ export type OutboxStatus = 'pending' | 'sent' | 'approved' | 'rejected' | 'chang
 
 export interface OutboxItem {
   id: string;
-  kind: 'submission';
+  /** submission: a JSON entry; upload: a peak-list/JCAMP file with its metadata. */
+  kind: 'submission' | 'upload';
   status: OutboxStatus;
   title: string;
   body: unknown;
@@ -17,15 +18,15 @@ export interface OutboxItem {
 }
 
 function toItem(r: LocalOutboxItem): OutboxItem {
-  return { id: r.id, kind: 'submission', status: r.status as OutboxStatus, title: r.title, body: JSON.parse(r.body), serverId: r.serverId, message: r.message, createdAt: r.createdAt, updatedAt: r.updatedAt };
+  return { id: r.id, kind: r.kind === 'upload' ? 'upload' : 'submission', status: r.status as OutboxStatus, title: r.title, body: JSON.parse(r.body), serverId: r.serverId, message: r.message, createdAt: r.createdAt, updatedAt: r.updatedAt };
 }
 
 /** Queue work for the server. Written before any network call, so nothing is lost offline. */
-export async function outboxAdd(item: { id: string; title: string; body: unknown }): Promise<void> {
+export async function outboxAdd(item: { id: string; kind?: OutboxItem['kind']; title: string; body: unknown }): Promise<void> {
   const db = await getLocalDb();
   const repo = db.getRepository(LocalOutboxItem);
   const now = new Date().toISOString();
-  const row = repo.create({ id: item.id, kind: 'submission', status: 'pending', title: item.title, body: JSON.stringify(item.body), serverId: null, message: null, createdAt: now, updatedAt: now });
+  const row = repo.create({ id: item.id, kind: item.kind ?? 'submission', status: 'pending', title: item.title, body: JSON.stringify(item.body), serverId: null, message: null, createdAt: now, updatedAt: now });
   await withWriteLock(() => repo.save(row));
 }
 

@@ -1,0 +1,97 @@
+// Offline-first submission end to end: the analyst submits an entry while the server is down
+// (it waits in the device outbox), the server comes back, sync sends it, a curator approves it,
+// and the analyst's next sync brings it into the library on the device.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startServer, type RunningServer } from './support/server';
+import { openBrowser, overflowsHorizontally, screenshot, signIn } from './support/browser';
+
+// An invented demo entry (not a real compound's data), unique to this test.
+const NAME = 'Demo: e2e brookfern ester';
+
+describe('submit offline, sync, approve, sync back', () => {
+  let server: RunningServer;
+  beforeAll(async () => {
+    server = await startServer();
+  });
+  afterAll(async () => {
+    await server?.stop();
+  });
+
+  it('when the analyst submits with the server down, then sync sends it, a curator approves it and the analyst finds it in the library', async () => {
+    const analyst = await openBrowser('phone');
+    const curator = await openBrowser('wide');
+    try {
+      const a = analyst.page;
+      await signIn(a, server.url, 'analyst@demo.tessera.test');
+      await a.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await expect.poll(() => a.getByText(/^Last sync: \d/).count(), { timeout: 30_000 }).toBe(1);
+
+      await server.stop();
+      await a.getByRole('link', { name: 'Submit' }).click();
+      await a.getByLabel('Compound name').fill(NAME);
+      await a.getByLabel('Formula (Hill order)').fill('C5H8O2');
+      await a.getByLabel('Source (citation or your lab notebook)').fill('Tessera browser test (invented demo entry)');
+      const signal = async (n: number, shift: string, mult: string, j: string, nuclei: string) => {
+        await a.getByLabel(`Signal ${n} shift (ppm)`).fill(shift);
+        await a.getByLabel(`Signal ${n} multiplicity`).fill(mult);
+        await a.getByLabel(`Signal ${n} J (Hz)`).fill(j);
+        await a.getByLabel(`Signal ${n} nuclei`).fill(nuclei);
+      };
+      await signal(1, '3.69', 's', '', '3');
+      await a.getByRole('button', { name: 'Add a signal' }).click();
+      await signal(2, '0.97', 't', '7.4', '3');
+      await a.getByRole('button', { name: 'Add a signal' }).click();
+      await signal(3, '2.33', 't', '7.4', '2');
+      await a.getByRole('button', { name: 'Add a signal' }).click();
+      await signal(4, '1.68', 'm', '', '2');
+      // Live curation check while typing: 10 protons against a formula with 8 H.
+      await expect.poll(() => a.getByText(/\[formula vs nuclei\] signals: 1H signals hold 10 nuclei/).count(), { timeout: 5_000 }).toBe(1);
+      await a.getByLabel('Formula (Hill order)').fill('C5H10O2');
+      // Reorder: the singlet moves from first to last.
+      await a.getByRole('button', { name: 'Move signal 1 down' }).click();
+      await a.getByRole('button', { name: 'Move signal 2 down' }).click();
+      await a.getByRole('button', { name: 'Move signal 3 down' }).click();
+      expect(await a.getByLabel('Signal 4 shift (ppm)').inputValue()).toBe('3.69');
+      await expect.poll(() => a.getByText('Curation checks: no problems found').count(), { timeout: 5_000 }).toBe(1);
+      expect(await overflowsHorizontally(a)).toBe(false);
+      await screenshot(a, 'submit-phone');
+      await a.getByRole('button', { name: 'Submit the entry' }).click();
+      await a.getByLabel('Submission saved').waitFor({ timeout: 10_000 });
+
+      await a.getByRole('link', { name: 'More' }).click();
+      await a.getByRole('link', { name: 'Open Sync' }).click();
+      await expect.poll(() => a.getByLabel('Pending outbox count').innerText(), { timeout: 15_000 }).toBe('1 waiting in the outbox');
+      await a.getByRole('button', { name: 'Sync now' }).click();
+      await expect.poll(() => a.getByText(/offline or the server is down/).count(), { timeout: 15_000 }).toBeGreaterThan(0);
+      expect(await a.getByLabel('Pending outbox count').innerText()).toBe('1 waiting in the outbox');
+      await screenshot(a, 'sync-offline-phone');
+
+      await server.start();
+      await a.getByRole('button', { name: 'Sync now' }).click();
+      await expect.poll(() => a.getByLabel('Pending outbox count').innerText(), { timeout: 20_000 }).toBe('0 waiting in the outbox');
+      expect(await a.getByLabel(`Status of ${NAME}`).innerText()).toBe('with the curators');
+
+      const c = curator.page;
+      await signIn(c, server.url, 'curator@demo.tessera.test');
+      await c.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await c.getByRole('link', { name: 'Review' }).click();
+      await c.getByRole('button', { name: `Review ${NAME}` }).click();
+      await c.getByLabel('Decision: approve').waitFor({ timeout: 15_000 });
+      await screenshot(c, 'review-wide');
+      await c.getByLabel('Comment to the submitter').fill('Checked against the lab notebook.');
+      await c.getByRole('button', { name: 'Record the decision' }).click();
+      await expect.poll(() => c.getByLabel('Recorded decision').count(), { timeout: 15_000 }).toBeGreaterThan(0);
+      expect(await c.getByLabel('Recorded decision').innerText()).toContain('Decided: approved');
+
+      await a.getByRole('button', { name: 'Sync now' }).click();
+      await expect.poll(() => a.getByLabel(`Status of ${NAME}`).innerText(), { timeout: 20_000 }).toMatch(/^approved/);
+      await screenshot(a, 'sync-phone');
+      await a.getByRole('link', { name: 'Library' }).click();
+      await a.getByLabel('Search the library').fill('brookfern');
+      await expect.poll(() => a.getByLabel(`Entry ${NAME}`).count(), { timeout: 15_000 }).toBe(1);
+    } finally {
+      await analyst.close();
+      await curator.close();
+    }
+  });
+});
