@@ -37,8 +37,18 @@ const locks = new WeakMap<DataSource, Promise<unknown>>();
  * other's work. Every write in the server goes through here; reads may run outside.
  */
 export function tx<T>(ds: DataSource, fn: (m: EntityManager) => Promise<T>): Promise<T> {
+  return exclusive(ds, () => ds.transaction(fn));
+}
+
+/**
+ * Runs `fn` (reads, no transaction) between transactions, never inside one. For reads whose
+ * result is cached by the library change number: read in the middle of a transaction that then
+ * rolls back, they could cache rows that never existed under a change number that will be
+ * reused. better-sqlite3 is synchronous, so waiting here costs next to nothing.
+ */
+export function exclusive<T>(ds: DataSource, fn: () => Promise<T>): Promise<T> {
   const previous = locks.get(ds) ?? Promise.resolve();
-  const run = previous.catch(() => undefined).then(() => ds.transaction(fn));
+  const run = previous.catch(() => undefined).then(fn);
   locks.set(ds, run.catch(() => undefined));
   return run;
 }

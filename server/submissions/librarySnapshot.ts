@@ -1,6 +1,7 @@
 import Fuse from 'fuse.js';
 import type { DataSource } from 'typeorm';
 import type { LibraryEntry as EntryBody } from '../../shared/libraryEntry';
+import { exclusive } from '../data-source';
 import { LibraryEntry } from '../entities/LibraryEntry';
 import { rowToEntry } from '../library/service';
 
@@ -23,7 +24,11 @@ export const nameKey = (s: string) => s.toLowerCase().normalize('NFKD').replace(
 const cache = new WeakMap<DataSource, LibrarySnapshot>();
 
 /** One cheap query decides whether the cached snapshot is still the library; a second reloads it. */
-export async function librarySnapshot(ds: DataSource): Promise<LibrarySnapshot> {
+export function librarySnapshot(ds: DataSource): Promise<LibrarySnapshot> {
+  return exclusive(ds, () => load(ds));
+}
+
+async function load(ds: DataSource): Promise<LibrarySnapshot> {
   const [{ s }]: { s: number | null }[] = await ds.query('SELECT MAX("seq") AS s FROM "library_entry"');
   const seq = s ?? 0;
   const cached = cache.get(ds);

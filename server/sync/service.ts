@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { exclusive } from '../data-source';
 import { badRequest } from '../errors/AppError';
 
 /** Cursors wrap the library change counter; clients must treat them as opaque strings. */
@@ -36,6 +37,10 @@ const MAX_CACHED_PAGES = 64;
  */
 export async function syncChangesJson(ds: DataSource, cursor: string | undefined, limit: number): Promise<string> {
   const after = cursorDecode(cursor);
+  return exclusive(ds, () => renderPage(ds, after, limit));
+}
+
+async function renderPage(ds: DataSource, after: number, limit: number): Promise<string> {
   const [{ s }]: { s: number | null }[] = await ds.query('SELECT MAX("seq") AS s FROM "library_entry"');
   const seq = s ?? 0;
   let cache = pageCache.get(ds);
