@@ -51,7 +51,7 @@ describe('demo mixtures', () => {
     const { manifest: fresh, files } = buildDemoMixtures();
     expect(fresh).toEqual(manifest);
     for (const name of Object.keys(files)) expect(fs.existsSync(path.join(DIR, name)), name).toBe(true);
-  });
+  }, 60000);
 
   it('refuse a recipe with a bad field, naming mixture and field', () => {
     const recipes = JSON.parse(fs.readFileSync(path.join(DIR, 'recipes.json'), 'utf8'));

@@ -1,8 +1,10 @@
-import { describe, expect, it } from 'vitest';
-import { entryCheckAgainstLibrary } from '../../../matching/library';
-import { ethanolEntry } from './helpers';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { entryCheckAgainstLibrary, smilesCountAtoms as warmUp } from '../../../matching/library';
+import { OPENCHEMLIB_WARM_UP_MS, ethanolEntry } from './helpers';
 
 describe('entryCheckAgainstLibrary', () => {
+  beforeAll(() => void warmUp('C'), OPENCHEMLIB_WARM_UP_MS);
+
   it('rejects a library that is not an array', () => {
     expect(() => entryCheckAgainstLibrary(ethanolEntry(), null as never)).toThrow(new TypeError('entryCheckAgainstLibrary needs the library as an array of entries'));
   });

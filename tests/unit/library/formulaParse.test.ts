@@ -1,9 +1,12 @@
 import fc from 'fast-check';
 import { Molecule } from 'openchemlib';
-import { describe, expect, it } from 'vitest';
-import { formulaParse } from '../../../matching/library';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { formulaParse, smilesCountAtoms as warmUp } from '../../../matching/library';
+import { OPENCHEMLIB_WARM_UP_MS } from './helpers';
 
 describe('formulaParse', () => {
+  beforeAll(() => void warmUp('C'), OPENCHEMLIB_WARM_UP_MS);
+
   it('rejects empty and malformed formulas with the position', () => {
     expect(() => formulaParse('')).toThrow(new RangeError('formula is empty'));
     expect(() => formulaParse('C2H6O)')).toThrow(new RangeError('formula "C2H6O)": unexpected ")" at position 6'));

@@ -20,3 +20,9 @@ export function ethanolEntry(over: Partial<LibraryEntry> = {}): LibraryEntry {
     ...over,
   };
 }
+
+/**
+ * openchemlib's first SMILES parse initialises the library and takes seconds on a loaded machine;
+ * doing it in beforeAll (with its own generous timeout) keeps that out of the tests' own time.
+ */
+export const OPENCHEMLIB_WARM_UP_MS = 60000;

@@ -1,9 +1,11 @@
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
-import { libraryCheck } from '../../../matching/library';
-import { ethanolEntry } from './helpers';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { libraryCheck, smilesCountAtoms as warmUp } from '../../../matching/library';
+import { OPENCHEMLIB_WARM_UP_MS, ethanolEntry } from './helpers';
 
 describe('libraryCheck', () => {
+  beforeAll(() => void warmUp('C'), OPENCHEMLIB_WARM_UP_MS);
+
   it('rejects a non-array and passes an empty library', () => {
     expect(() => libraryCheck('x' as unknown as unknown[])).toThrow(new TypeError('libraryCheck needs an array of entries'));
     expect(libraryCheck([])).toEqual([]);

@@ -1,7 +1,10 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { smilesCountAtoms } from '../../../matching/library';
+import { OPENCHEMLIB_WARM_UP_MS } from './helpers';
 
 describe('smilesCountAtoms', () => {
+  beforeAll(() => void smilesCountAtoms('C'), OPENCHEMLIB_WARM_UP_MS);
+
   it('rejects empty and unreadable SMILES', () => {
     expect(() => smilesCountAtoms('  ')).toThrow(new TypeError('smiles must be a non-empty string'));
     expect(() => smilesCountAtoms('C1CC')).toThrow(/^smiles "C1CC" cannot be read: SmilesParser: dangling ring closure/);
