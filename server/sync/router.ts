@@ -3,7 +3,7 @@ import { anySignedIn, currentUser, roles, type RouteDef } from '../auth/access';
 import type { DataSource } from 'typeorm';
 import { parseOr400, zodIssues } from '../errors/validate';
 import { outcomeToResult, type Proposal, type SubmissionService } from '../submissions/service';
-import { syncChangesJson } from './service';
+import { syncChangesPage } from './service';
 
 export function syncRoutes(ds: DataSource, submissions: SubmissionService): RouteDef[] {
   return [
@@ -15,7 +15,10 @@ export function syncRoutes(ds: DataSource, submissions: SubmissionService): Rout
       handlers: [
         async (req, res) => {
           const q = parseOr400(SyncChangesQuerySchema, req.query, 'query');
-          res.type('application/json').send(await syncChangesJson(ds, q.cursor, q.limit));
+          const page = await syncChangesPage(ds, q.cursor, q.limit);
+          // Express compares the ETag with If-None-Match and answers 304 itself.
+          res.type('application/json').setHeader('ETag', page.etag);
+          res.send(page.body);
         },
       ],
     },

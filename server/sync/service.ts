@@ -1,3 +1,4 @@
+import crypto from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import { exclusive } from '../data-source';
 import { badRequest } from '../errors/AppError';
@@ -23,7 +24,13 @@ interface PageRow {
 }
 
 /** Rendered pages for the library as of one change number; dropped as soon as the library changes. */
-const pageCache = new WeakMap<DataSource, { seq: number; pages: Map<string, string> }>();
+/** A rendered page: the JSON bytes and their strong ETag, both computed once. */
+export interface RenderedPage {
+  body: Buffer;
+  etag: string;
+}
+
+const pageCache = new WeakMap<DataSource, { seq: number; pages: Map<string, RenderedPage> }>();
 const MAX_CACHED_PAGES = 64;
 
 /**
@@ -31,16 +38,16 @@ const MAX_CACHED_PAGES = 64;
  * change number is past the cursor, in change order. An entry changed twice since the cursor
  * appears once, at its latest state, because superseded revisions are not visible.
  *
- * Returns the SyncChangesResponse as JSON text. The stored body already is the entry's JSON
+ * Returns the SyncChangesResponse as JSON bytes with an ETag (a client sending If-None-Match gets 304). The stored body already is the entry's JSON
  * (without revision/retired), so it is spliced in rather than parsed and re-serialised, and the
  * text of a page is kept until the library next changes: many clients pull the same pages.
  */
-export async function syncChangesJson(ds: DataSource, cursor: string | undefined, limit: number): Promise<string> {
+export async function syncChangesPage(ds: DataSource, cursor: string | undefined, limit: number): Promise<RenderedPage> {
   const after = cursorDecode(cursor);
   return exclusive(ds, () => renderPage(ds, after, limit));
 }
 
-async function renderPage(ds: DataSource, after: number, limit: number): Promise<string> {
+async function renderPage(ds: DataSource, after: number, limit: number): Promise<RenderedPage> {
   const [{ s }]: { s: number | null }[] = await ds.query('SELECT MAX("seq") AS s FROM "library_entry"');
   const seq = s ?? 0;
   let cache = pageCache.get(ds);
@@ -66,7 +73,9 @@ async function renderPage(ds: DataSource, after: number, limit: number): Promise
     return `{"entryId":${JSON.stringify(r.entry_id)},"revision":${r.revision},"retired":${retired},"entry":${entry}}`;
   });
   const json = `{"changes":[${changes.join(',')}],"nextCursor":${JSON.stringify(cursorEncode(last))},"hasMore":${rows.length > limit}}`;
+  const body = Buffer.from(json, 'utf8');
+  const rendered = { body, etag: `"${crypto.createHash('sha1').update(body).digest('base64url')}"` };
   if (cache.pages.size >= MAX_CACHED_PAGES) cache.pages.delete(cache.pages.keys().next().value!);
-  cache.pages.set(key, json);
-  return json;
+  cache.pages.set(key, rendered);
+  return rendered;
 }
