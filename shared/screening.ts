@@ -14,6 +14,7 @@ export const ScreenOptionsSchema = z.object({
   minScore: z.number().min(0).max(1).optional().describe('candidates below this score are not reported; default 0.5'),
   snrThreshold: z.number().positive().optional().describe('minimum S/N for a picked spectrum peak; default 3 (ICH Q2(R1) common practice)'),
   includeRetired: z.boolean().optional().describe('screen retired entries too; default false'),
+  anySolvent: z.boolean().optional().describe('also screen entries recorded in another solvent; default false (shifts move with the solvent)'),
   maxCandidates: z.number().int().positive().optional().describe('report at most this many candidates; default all'),
 });
 export type ScreenOptions = z.infer<typeof ScreenOptionsSchema>;

@@ -8,7 +8,7 @@ import { screenMixture } from '../../matching/screen';
 import { CAUTION_TEXT } from '../../shared/caution';
 import type { Mixture } from '../../shared/mixture';
 import type { CliCommand } from './index';
-import { cliErrorReport, libraryFileRead, mixtureFileRead, SCREEN_OPTIONS, screenSettings, UsageError } from './screen';
+import { cliErrorReport, librariesRead, mixtureFileRead, SCREEN_OPTIONS, screenSettings, UsageError } from './screen';
 
 const MIXTURE_FILE = /\.(csv|tsv|txt|jdx|dx|jcamp)$/i;
 
@@ -36,14 +36,14 @@ export async function run(argv: string[]): Promise<number> {
   try {
     const { values } = parseArgs({ args: argv, options: { ...SCREEN_OPTIONS, folder: { type: 'string' }, out: { type: 'string' } }, allowPositionals: false });
     if (values.help) {
-      console.log('usage: tessera batch --library L.json --folder DIR --out summary.csv [--solvent CDCl3] [--nucleus 1H] [--mhz 600] [--tolerance 0.03] [--min-score 0.5] [--keep-solvent]');
+      console.log('usage: tessera batch --library L.json [--library L2.json] --folder DIR --out summary.csv [--solvent CDCl3] [--nucleus 1H] [--mhz 600] [--tolerance 0.03] [--min-score 0.5] [--keep-solvent]');
       return 0;
     }
-    if (!values.library) throw new UsageError('--library L.json is required');
+    if (!values.library?.length) throw new UsageError('--library L.json is required');
     if (!values.folder) throw new UsageError('--folder DIR is required');
     if (!values.out) throw new UsageError('--out summary.csv is required');
     const { meta, options } = screenSettings(values);
-    const entries = libraryFileRead(values.library);
+    const entries = librariesRead(values.library);
     let names: string[];
     try {
       names = readdirSync(values.folder).filter((n) => MIXTURE_FILE.test(n) && statSync(path.join(values.folder!, n)).isFile()).sort();
@@ -86,7 +86,7 @@ export async function run(argv: string[]): Promise<number> {
       }
       console.log(`${file}: ${r.candidates.length} candidate(s)${r.candidates[0] ? `, best ${r.candidates[0].name} (${r.candidates[0].score.toFixed(3)})` : ''}`);
     }
-    const csv = `# ${CAUTION_TEXT}\n${Papa.unparse({ fields: [...BATCH_COLUMNS], data: rows.map((row) => BATCH_COLUMNS.map((c) => row[c])) })}\n`;
+    const csv = `# ${CAUTION_TEXT}\n${Papa.unparse({ fields: [...BATCH_COLUMNS], data: rows.map((row) => BATCH_COLUMNS.map((c) => row[c])) }, { newline: '\n' })}\n`;
     const tmp = `${values.out}.tmp-${process.pid}`;
     try {
       writeFileSync(tmp, csv);

@@ -15,7 +15,7 @@ import type { CliCommand } from './index';
 export const CLI_DEFAULT_MHZ = 400;
 
 export const SCREEN_OPTIONS = {
-  library: { type: 'string' },
+  library: { type: 'string', multiple: true },
   solvent: { type: 'string' },
   nucleus: { type: 'string' },
   mhz: { type: 'string' },
@@ -135,18 +135,33 @@ export function screenResultTable(r: ScreenResult): string {
   return out.join('\n');
 }
 
+/** Reads one or more library files (--library may repeat); an id found twice is an error. */
+export function librariesRead(files: readonly string[]): LibraryEntry[] {
+  const entries: LibraryEntry[] = [];
+  const seen = new Map<string, string>();
+  for (const file of files) {
+    for (const e of libraryFileRead(file)) {
+      const first = seen.get(e.id);
+      if (first !== undefined) throw new InputError(`library ${file}`, [{ field: 'id', message: `entry id "${e.id}" is also in ${first}` }]);
+      seen.set(e.id, file);
+      entries.push(e);
+    }
+  }
+  return entries;
+}
+
 /** Exit codes: 0 done, 1 bad input file, 2 bad command line. */
 export async function run(argv: string[]): Promise<number> {
   try {
     const { values } = parseArgs({ args: argv, options: { ...SCREEN_OPTIONS, mixture: { type: 'string' }, json: { type: 'boolean' } }, allowPositionals: false });
     if (values.help) {
-      console.log('usage: tessera screen --library L.json --mixture M.csv|M.jdx [--solvent CDCl3] [--nucleus 1H] [--mhz 600] [--tolerance 0.03] [--min-score 0.5] [--keep-solvent] [--json]');
+      console.log('usage: tessera screen --library L.json [--library L2.json] --mixture M.csv|M.jdx [--solvent CDCl3] [--nucleus 1H] [--mhz 600] [--tolerance 0.03] [--min-score 0.5] [--keep-solvent] [--json]');
       return 0;
     }
-    if (!values.library) throw new UsageError('--library L.json is required');
+    if (!values.library?.length) throw new UsageError('--library L.json is required');
     if (!values.mixture) throw new UsageError('--mixture M.csv is required');
     const { meta, options } = screenSettings(values);
-    const entries = libraryFileRead(values.library);
+    const entries = librariesRead(values.library);
     const mixture = mixtureFileRead(values.mixture, meta);
     const result = screenMixture(mixture, entries, options);
     console.log(values.json ? JSON.stringify(result, null, 2) : screenResultTable(result));

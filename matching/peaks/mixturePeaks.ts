@@ -28,7 +28,8 @@ export interface MixturePeakSet {
 }
 
 /**
- * The peaks a screening works on. A peak list is taken as it is (S/N unknown); a spectrum is
+ * The peaks a screening works on. A peak list is taken as it is (S/N unknown; heights with widths
+ * are turned into areas, see below); a spectrum is
  * peak-picked with an S/N threshold and its peaks carry S/N and integrals (the intensity used for
  * matching is the integral, which scales with nuclei; height does only at equal widths).
  * Then the reference peak and the solvent/water regions are set aside, each with its reason.
@@ -45,11 +46,18 @@ export function mixturePeaks(mixture: Mixture, options: MixturePeaksOptions = {}
   const excluded: ExcludedPeak[] = [];
   let noise: number | null = null;
   if (mixture.kind === 'peaks') {
+    // Heights scale with nuclei only at equal widths (a broad multiplet is low but large). When the
+    // list gives widths, a height becomes the Lorentzian area π·H·Γ/2 (formulas.md (a)); peaks
+    // without a width get the median width of those that have one.
+    const widths = mixture.peaks.map((p) => p.widthHz).filter((w): w is number => w !== undefined && w > 0).sort((a, b) => a - b);
+    const toArea = mixture.intensityKind === 'height' && widths.length > 0;
+    const medianWidth = widths.length > 0 ? widths[widths.length >> 1] : 1;
     mixture.peaks.forEach((p, i) => {
       if (!Number.isFinite(p.shift) || !Number.isFinite(p.intensity) || p.intensity < 0) {
         throw new RangeError(`peak ${i + 1}: shift and intensity must be finite, intensity ≥ 0`);
       }
-      raw.push({ sourceIndex: i, shift: p.shift, intensity: p.intensity, widthHz: p.widthHz, snr: null });
+      const intensity = toArea ? (Math.PI / 2) * p.intensity * (p.widthHz ?? medianWidth) : p.intensity;
+      raw.push({ sourceIndex: i, shift: p.shift, intensity, widthHz: p.widthHz, snr: null });
     });
   } else {
     const picked = spectrumPickPeaks(mixture, { snrThreshold });

@@ -10,9 +10,9 @@ export interface SignalMatchSummary {
 }
 
 export interface EntryScoreOptions {
-  /** Shift window half-width, ppm (the Gaussian's σ is half of it). */
+  /** Shift window half-width, ppm (the Gaussian's width is tied to it). */
   tolerancePpm: number;
-  /** Coefficient of variation at which the intensity factor falls to e^(−1/2). Default 0.5. */
+  /** Coefficient of variation at which the intensity factor falls to e^(−1/2). Default 1. */
   cvScale?: number;
 }
 
@@ -37,18 +37,20 @@ export interface EntryScore {
  *   E enters squared: a multiplet that should be visible but is missing is strong evidence
  *   against the compound, stronger than its share of nuclei (E = 2/3 gives 0.44, E = 1/2 gives 0.25),
  *   so an absent compound that merely shares one multiplet with a present one stays low.
- * G (shift agreement) = Σ_matched n_s · exp(−½ (Δδ_s / σ)²) / Σ_matched n_s with σ = tolerance/2:
- *   1 at Δδ = 0, 0.61 at half the tolerance, 0.14 at the window edge — a smooth penalty instead of
- *   an in/out step.
+ * G (shift agreement) = Σ_matched n_s · exp(−(Δδ_s / tol)²) / Σ_matched n_s: a Gaussian in Δδ/tolerance
+ *   (σ = tol/√2) instead of an in/out step: 1 at Δδ = 0, 0.78 at half the tolerance, 0.37 at the
+ *   window edge. A whole compound moved by 2/3 of the window (a pH or referencing offset) keeps 0.64.
  * C (intensity consistency) = exp(−½ (CV / cvScale)²), CV = population standard deviation / mean of
  *   r_s = I_s / n_s over matched signals (I_s = matched intensity of multiplet s). A compound's
  *   signals scale with their nuclei (3H methyl : 2H methylene = 3:2), so r_s should be constant;
- *   C = 1 with fewer than two matched signals (nothing to compare). cvScale defaults to 0.5:
- *   a 5 % intensity noise costs < 1 %, a signal doubled by overlap with another compound ~20 %.
+ *   C = 1 with fewer than two matched signals (nothing to compare). cvScale defaults to 1: in real
+ *   mixtures a multiplet shared with another compound, or two lines merged into one picked peak,
+ *   inflates single signals, so the check is kept as a graded penalty (CV 0.2 costs 2 %, CV 0.5
+ *   costs 12 %, CV 1 costs 39 %) rather than a veto.
  */
 export function entryScore(signals: readonly SignalMatchSummary[], options: EntryScoreOptions): EntryScore {
   const tol = options.tolerancePpm;
-  const cvScale = options.cvScale ?? 0.5;
+  const cvScale = options.cvScale ?? 1;
   if (!(tol > 0)) throw new RangeError(`tolerancePpm must be positive, got ${tol}`);
   if (!(cvScale > 0)) throw new RangeError(`cvScale must be positive, got ${cvScale}`);
   if (signals.length === 0) throw new RangeError('an entry needs at least one signal to be scored');
@@ -57,7 +59,6 @@ export function entryScore(signals: readonly SignalMatchSummary[], options: Entr
   let matchedNuclei = 0;
   let extra = 0;
   let gSum = 0;
-  const sigma = tol / 2;
   const ratios: number[] = [];
   for (const s of signals) {
     if (!(s.nuclei > 0)) throw new RangeError(`nuclei must be positive, got ${s.nuclei}`);
@@ -67,8 +68,8 @@ export function entryScore(signals: readonly SignalMatchSummary[], options: Entr
     if (!Number.isFinite(s.deltaPpm) || !(s.intensity >= 0)) throw new RangeError('a matched signal needs a finite deltaPpm and intensity ≥ 0');
     matchedNuclei += s.nuclei;
     if (!req) extra += s.nuclei;
-    const z = s.deltaPpm / sigma;
-    gSum += s.nuclei * Math.exp(-0.5 * z * z);
+    const z = s.deltaPpm / tol;
+    gSum += s.nuclei * Math.exp(-z * z);
     ratios.push(s.intensity / s.nuclei);
   }
   if (matchedNuclei === 0) return { score: 0, explainedShare: 0, shiftFactor: 0, intensityFactor: 0, intensityCv: null };

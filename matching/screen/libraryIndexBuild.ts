@@ -1,5 +1,6 @@
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Nucleus } from '../../shared/nucleus';
+import type { Solvent } from '../../shared/solvent';
 import { multipletToLines } from '../multiplets/multipletToLines';
 import type { MultipletLines } from '../score/multipletsMatchPeaks';
 
@@ -42,6 +43,8 @@ export interface LibraryIndex {
 export interface LibraryIndexOptions {
   /** Index retired entries too. Default false. */
   includeRetired?: boolean;
+  /** Keep only entries recorded in this solvent (and those recorded as "other"). Default: all. */
+  solvent?: Solvent;
   /** Bin width, ppm. Default 0.01 (1H), 0.1 (13C). */
   binWidthPpm?: number;
 }
@@ -56,6 +59,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
   const sigStartList: number[] = [];
   for (const entry of entries) {
     if (entry.retired && !options.includeRetired) continue;
+    if (options.solvent !== undefined && entry.solvent !== options.solvent && entry.solvent !== 'other') continue;
     const mine = entry.signals.map((s, i) => [s, i] as const).filter(([s]) => s.nucleus === nucleus);
     if (mine.length === 0) continue;
     const e = kept.length;

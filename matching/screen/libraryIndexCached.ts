@@ -11,7 +11,7 @@ const cache = new WeakMap<readonly LibraryEntry[], Map<string, { length: number;
  * library by making a new array (a changed entry object inside the same array is not noticed).
  */
 export function libraryIndexCached(entries: readonly LibraryEntry[], nucleus: Nucleus, mhz: number, options: LibraryIndexOptions = {}): LibraryIndex {
-  const key = `${nucleus}|${mhz}|${options.includeRetired ? 1 : 0}|${options.binWidthPpm ?? ''}`;
+  const key = `${nucleus}|${mhz}|${options.includeRetired ? 1 : 0}|${options.solvent ?? '*'}|${options.binWidthPpm ?? ''}`;
   let byKey = cache.get(entries);
   if (!byKey) {
     byKey = new Map();

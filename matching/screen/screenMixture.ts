@@ -13,7 +13,8 @@ import { libraryIndexEntryMatch, type SignalMatch } from './libraryIndexEntryMat
  * Screens a mixture against library entries by tolerance-windowed matching and returns ranked
  * candidates with their evidence. Defaults (ScreenOptions): tolerancePpm DEFAULT_TOLERANCE_PPM
  * per nucleus (1H 0.03, 13C 0.5), excludeSolvent true, excludeReference true, minScore 0.5,
- * snrThreshold 3, includeRetired false, maxCandidates all.
+ * snrThreshold 3, includeRetired false, anySolvent false (a mixture in a named solvent is screened
+ * against entries recorded in that solvent, plus entries recorded as "other"), maxCandidates all.
  *
  * Cost: the library's shift index is built once per library array (libraryIndexCached); each
  * peak visits only the index bins within its window, and an entry is matched in full only when
@@ -39,7 +40,10 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
     excludeReference: options.excludeReference ?? true,
     snrThreshold: options.snrThreshold ?? 3,
   });
-  const index = libraryIndexCached(entries, mixture.nucleus, mixture.mhz, { includeRetired: options.includeRetired ?? false });
+  // Shifts move with the solvent (Fulmer 2010: median spread 0.3 ppm across solvents), so a named
+  // solvent screens only entries recorded in it (and solvent-neutral "other" entries).
+  const solvent = !(options.anySolvent ?? false) && mixture.solvent !== 'other' ? mixture.solvent : undefined;
+  const index = libraryIndexCached(entries, mixture.nucleus, mixture.mhz, { includeRetired: options.includeRetired ?? false, ...(solvent ? { solvent } : {}) });
   const shifts = Float64Array.from(set.used, (p) => p.shift);
   const intensities = Float64Array.from(set.used, (p) => p.intensity);
 

@@ -19,6 +19,7 @@ export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], option
   const out: Array<{ entryId: string; score: number; explained: number }> = [];
   for (const entry of entries) {
     if (entry.retired) continue;
+    if (mixture.solvent !== 'other' && entry.solvent !== mixture.solvent && entry.solvent !== 'other') continue;
     const signals = entry.signals.filter((s) => s.nucleus === mixture.nucleus);
     if (signals.length === 0) continue;
     const multiplets = signals.map((s) => {

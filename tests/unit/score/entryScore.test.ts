@@ -27,10 +27,11 @@ describe('entryScore', () => {
     expect(entryScore([sig(3, true), sig(1, true, 0, 1, true), sig(2, false)], { tolerancePpm: 0.03 }).explainedShare).toBeCloseTo(4 / 6, 12);
   });
 
-  // Gaussian in Δδ with σ = tolerance/2: exp(−½·1²) at Δδ = tol/2, exp(−2) at the window edge.
+  // Gaussian in Δδ/tolerance: exp(−¼) at Δδ = tol/2, exp(−1) at the window edge; nuclei-weighted mean.
   it('penalises shift deviation smoothly', () => {
-    expect(entryScore([sig(3, true, 0.015)], { tolerancePpm: 0.03 }).shiftFactor).toBeCloseTo(Math.exp(-0.5), 12);
-    expect(entryScore([sig(3, true, -0.03)], { tolerancePpm: 0.03 }).shiftFactor).toBeCloseTo(Math.exp(-2), 12);
+    expect(entryScore([sig(3, true, 0.015)], { tolerancePpm: 0.03 }).shiftFactor).toBeCloseTo(Math.exp(-0.25), 12);
+    expect(entryScore([sig(3, true, -0.03)], { tolerancePpm: 0.03 }).shiftFactor).toBeCloseTo(Math.exp(-1), 12);
+    expect(entryScore([sig(3, true, 0.03), sig(1, true, 0)], { tolerancePpm: 0.03 }).shiftFactor).toBeCloseTo((3 * Math.exp(-1) + 1) / 4, 12);
   });
 
   // A signal's integral is proportional to its number of nuclei (qNMR principle, BIPM ISRD-03 eq. 1):
@@ -39,9 +40,10 @@ describe('entryScore', () => {
     const ok = entryScore([sig(3, true, 0, 300), sig(2, true, 0, 200)], { tolerancePpm: 0.03 });
     expect(ok.intensityCv).toBeCloseTo(0, 12);
     const bad = entryScore([sig(3, true, 0, 200), sig(2, true, 0, 200)], { tolerancePpm: 0.03 });
-    // r = 66.7 and 100: mean 83.3, population sd 16.7 → CV 0.2; factor exp(−½ (0.2/0.5)²)
+    // r = 66.7 and 100: mean 83.3, population sd 16.7 → CV 0.2; factor exp(−½ (0.2/1)²)
     expect(bad.intensityCv).toBeCloseTo(0.2, 12);
-    expect(bad.intensityFactor).toBeCloseTo(Math.exp(-0.5 * 0.16), 12);
+    expect(bad.intensityFactor).toBeCloseTo(Math.exp(-0.5 * 0.04), 12);
+    expect(entryScore([sig(3, true, 0, 200), sig(2, true, 0, 200)], { tolerancePpm: 0.03, cvScale: 0.5 }).intensityFactor).toBeCloseTo(Math.exp(-0.5 * 0.16), 12);
   });
 
   it('does not change when every intensity is scaled', () => {

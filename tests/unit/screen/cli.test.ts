@@ -67,7 +67,9 @@ describe('tessera screen', () => {
     expect(await screen(['--library', LIB, '--mixture', MIX, '--solvent', 'CDCl3', '--mhz', '600'])).toBe(0);
     const text = out.join('\n');
     const rows = text.split('\n').filter((l) => /^\d+\s/.test(l));
-    expect(rows.map((r) => r.split(/\s{2,}/)[5])).toEqual(['contam-ethyl-acetate-cdcl3', 'contam-toluene-cdcl3']);
+    // tert-butyl alcohol 1.28 lies 0.02 ppm from the ethyl acetate triplet centre 1.26 (Gottlieb 1997): reported, flagged
+    expect(rows.map((r) => r.split(/\s{2,}/)[5])).toEqual(['contam-ethyl-acetate-cdcl3', 'contam-toluene-cdcl3', 'contam-tert-butyl-alcohol-cdcl3']);
+    expect(rows[2]).toMatch(/shadowed by contam-ethyl-acetate-cdcl3$/);
     expect(text).toContain('Set aside: 0.000 (reference), 1.560 (water), 7.250 (solvent), 7.260 (solvent)');
     expect(text.trimEnd().endsWith(CAUTION_TEXT)).toBe(true);
   });
@@ -115,7 +117,11 @@ describe('tessera batch', () => {
     const text = readFileSync(summary, 'utf8');
     expect(text.split('\n')[0]).toBe(`# ${CAUTION_TEXT}`);
     const rows = Papa.parse<Record<string, string>>(text, { header: true, comments: '#', skipEmptyLines: true }).data;
-    expect(rows.filter((r) => r.file === 'a-etoac-toluene.csv').map((r) => r.entry_id)).toEqual(['contam-ethyl-acetate-cdcl3', 'contam-toluene-cdcl3']);
+    expect(rows.filter((r) => r.file === 'a-etoac-toluene.csv').map((r) => [r.entry_id, r.shadowed_by])).toEqual([
+      ['contam-ethyl-acetate-cdcl3', ''],
+      ['contam-toluene-cdcl3', ''],
+      ['contam-tert-butyl-alcohol-cdcl3', 'contam-ethyl-acetate-cdcl3'],
+    ]);
     expect(rows.filter((r) => r.file === 'b-nothing.csv')).toEqual([expect.objectContaining({ rank: '', entry_id: '' })]);
     const acetone = rows.filter((r) => r.file === 'c-acetone.jdx');
     expect(acetone.map((r) => r.entry_id).sort()).toEqual(['contam-acetone-cdcl3', 'demo-acetone-twin']);
@@ -131,5 +137,15 @@ describe('tessera batch', () => {
     expect(await batch(['--library', LIB, '--folder', dir, '--out', summary, '--mhz', '600'])).toBe(1);
     expect(err).toEqual(['error: b.csv: peak list: line 2: intensity must be ≥ 0, got -6', '1 of 2 files could not be read; nothing written.']);
     expect(existsSync(summary)).toBe(false);
+  });
+});
+
+describe('tessera screen with several libraries', () => {
+  it('reads every --library and refuses an id found twice', async () => {
+    const dir = tmp();
+    const m = path.join(dir, 'acetone.csv');
+    writeFileSync(m, 'shift,intensity\n2.17,6\n');
+    expect(await screen(['--library', LIB, '--library', LIB, '--mixture', m, '--mhz', '400'])).toBe(1);
+    expect(err.at(-1)).toMatch(/^error: library .*library-small\.json: id: entry id "contam-acetone-cdcl3" is also in .*library-small\.json$/);
   });
 });

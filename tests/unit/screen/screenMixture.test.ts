@@ -258,3 +258,14 @@ describe('screenMixture: properties', () => {
     );
   });
 });
+
+describe('screenMixture: solvent of the entries', () => {
+  // Acetone: 2.17 in CDCl3, 2.09 in DMSO-d6 (Gottlieb 1997 Table 1) — entries are solvent-specific.
+  it('screens a CDCl3 mixture against CDCl3 entries only, unless anySolvent', () => {
+    const lib = [...tableLibrary('CDCl3'), ...tableLibrary('DMSO-d6')];
+    const m = { ...empty, peaks: [{ shift: 2.09, intensity: 6 }] };
+    expect(screenMixture(m, lib).candidates.some((c) => c.entryId === 'contam-acetone-dmso-d6')).toBe(false);
+    expect(screenMixture(m, lib, { anySolvent: true }).candidates.some((c) => c.entryId === 'contam-acetone-dmso-d6')).toBe(true);
+    expect(screenMixture({ ...m, solvent: 'DMSO-d6' }, lib).candidates.map((c) => c.entryId)).toContain('contam-acetone-dmso-d6');
+  });
+});
