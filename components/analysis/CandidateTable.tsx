@@ -1,5 +1,7 @@
 import { useMemo, useState } from 'react';
-import { Text } from 'react-native';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { useWideLayout } from '../../hooks/useWideLayout';
+import { ChoiceRow } from '../ui/ChoiceRow';
 import { useTheme } from '../../hooks/useTheme';
 import { DataTable, sortRows, type Column } from '../ui/DataTable';
 import { fmt, statusText, withUncertainty, type CandidateRow } from '../../client/analysisRows';
@@ -74,6 +76,57 @@ export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: Cand
     return cols;
   }, [hasStandard, t]);
   const sorted = sortRows(rows, columns, sort);
+  const wide = useWideLayout();
+  if (!wide) {
+    // Phone: one card a candidate, so the amounts are never off-screen in a sideways table.
+    return (
+      <View accessibilityLabel="Candidates" style={styles.cards}>
+        <ChoiceRow
+          label="Sort candidates by"
+          value={`${sort.key}:${sort.dir}`}
+          onChange={(v) => {
+            const [key, dir] = v.split(':');
+            setSort({ key, dir: dir as 'asc' | 'desc' });
+          }}
+          options={[
+            { value: 'rank:asc', text: 'rank' },
+            { value: 'amount:desc', text: 'amount' },
+            { value: 'q:asc', text: 'q-value' },
+            { value: 'name:asc', text: 'name' },
+          ]}
+        />
+        {sorted.map((r) => (
+          <Pressable
+            key={r.entryId}
+            accessibilityRole="button"
+            accessibilityLabel={`Candidate ${r.name}`}
+            onPress={() => onSelect(r)}
+            style={[styles.card, { borderColor: r.entryId === selectedId ? t.colours.accent : t.colours.border, backgroundColor: t.colours.surface, borderRadius: t.radius.md }]}
+          >
+            <Text style={{ color: r.confirmed ? t.colours.text : t.colours.textMuted, fontFamily: r.confirmed ? t.fonts.semibold : t.fonts.regular, fontSize: 15 }}>
+              {r.rank}. {r.name}
+              {r.screen.contaminant ? ' · impurity' : ''}
+            </Text>
+            <View style={styles.facts}>
+              <Text style={[styles.fact, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>score {r.screen.score.toFixed(2)}</Text>
+              <Text style={[styles.fact, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>q {fmt(r.qValue, 2)}</Text>
+              <Text style={[styles.fact, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>S/N {fmt(r.amount?.snr ?? r.fit?.snr, 2)}</Text>
+            </View>
+            <Text style={[styles.fact, { color: t.colours.text, fontFamily: t.fonts.regular }]}>
+              mole fraction{' '}
+              <Text accessibilityLabel={`Amount of ${r.name}`} style={{ fontFamily: t.fonts.semibold }}>
+                {r.amount && !r.amount.isStandard ? withUncertainty(r.amount.moleFraction, r.amount.moleFractionUncertainty) : '—'}
+              </Text>
+              {hasStandard && r.amount?.concentrationMM != null ? ` · ${withUncertainty(r.amount.concentrationMM, r.amount.concentrationUncertaintyMM)} mmol/L` : ''}
+            </Text>
+            <Text numberOfLines={2} style={[styles.fact, { color: r.confirmed ? t.colours.positive : t.colours.textMuted, fontFamily: t.fonts.regular }]}>
+              {statusText(r)}
+            </Text>
+          </Pressable>
+        ))}
+      </View>
+    );
+  }
   return (
     <DataTable
       label="Candidates"
@@ -88,3 +141,10 @@ export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: Cand
     />
   );
 }
+
+const styles = StyleSheet.create({
+  cards: { gap: 8 },
+  card: { borderWidth: 1, padding: 10, gap: 3 },
+  facts: { flexDirection: 'row', flexWrap: 'wrap', gap: 12 },
+  fact: { fontSize: 13 },
+});

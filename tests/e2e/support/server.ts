@@ -79,7 +79,8 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
     await new Promise<void>((resolve) => {
       c.once('exit', () => resolve());
       c.kill('SIGTERM');
-      setTimeout(() => c.kill('SIGKILL'), 5000).unref();
+      const timer: { unref?(): void } = setTimeout(() => c.kill('SIGKILL'), 5000) as never;
+      timer.unref?.();
     });
   }
 
