@@ -37,10 +37,10 @@ export function fitDesignPeaks(peaks: FitLine[], span: [number, number], toleran
   for (let i = 0; i < n; i++) axis[i] = lo + i * step;
   const curve = (lines: FitLine[]): Float64Array => {
     const out = new Float64Array(n);
-    // Display curves only: tails below 1e-9 of a line's height are left out.
+    // Display curves only: tails below 1e-6 of a line's height are left out.
     for (const l of lines) {
       const height = l.a * lorentzianUnitArea(0, l.w);
-      const r = lorentzianReach(l.w, 1e-9);
+      const r = lorentzianReach(l.w, 1e-6);
       const i0 = Math.max(0, Math.floor((l.x - r - lo) / step));
       const i1 = Math.min(n, Math.ceil((l.x + r - lo) / step) + 1);
       for (let i = i0; i < i1; i++) out[i] += height * lorentzianFct(axis[i] - l.x, l.w);

@@ -127,6 +127,11 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     design = fitDesignPeaks(peaks, [lo - tolerancePpm, hi + tolerancePpm], tolerancePpm);
   }
 
+  // A peak list without a noise level: its smallest height is the detection floor it was picked at.
+  const smallestPeak =
+    mixture.kind === 'peaks' && mixture.intensityKind === 'height' && mixture.peaks.length > 0
+      ? mixture.peaks.reduce((m, p) => Math.min(m, p.intensity), Infinity)
+      : null;
   let offsets = new Array<number>(kept.length).fill(0);
   let base = linesAt(linewidthHz);
   let current = base;
@@ -172,6 +177,8 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
           reject('below-share', `explains ${(share * 100).toPrecision(2)} % of the mixture intensity, below the ${(minShare * 100).toPrecision(2)} % threshold`);
         } else if (snr !== null && snr < DETECTION_SNR) {
           reject('below-detection', `its tallest fitted line has S/N ${snr.toFixed(1)}, below the detection limit ${DETECTION_SNR}`);
+        } else if (snr === null && smallestPeak !== null && c[a] * tallest(current[i]) < smallestPeak) {
+          reject('below-detection', 'its tallest fitted line is lower than the smallest peak of the list, so it could not have been seen');
         }
       });
       if (drop.length === 0) break;
