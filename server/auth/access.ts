@@ -42,6 +42,36 @@ interface AccessClaims {
   sub: string;
   role: Role;
   typ: 'access';
+  exp: number;
+}
+
+/**
+ * Tokens already verified, by secret and token: jsonwebtoken's verify costs about a third of a
+ * millisecond, which dominated small requests such as an up-to-date sync pull. A signature stays
+ * valid, so only the expiry is re-checked on a hit. Bounded: cleared when full.
+ */
+const verified = new Map<string, AccessClaims>();
+const MAX_VERIFIED = 10_000;
+
+function verifyAccessToken(token: string, secret: string): AccessClaims {
+  const key = `${secret}\u0000${token}`;
+  const hit = verified.get(key);
+  if (hit) {
+    if (hit.exp * 1000 > Date.now()) return hit;
+    verified.delete(key);
+    throw unauthorized('access token expired: refresh the session or sign in again');
+  }
+  let claims: AccessClaims;
+  try {
+    claims = jwt.verify(token, secret, { algorithms: ['HS256'], issuer: 'tessera' }) as unknown as AccessClaims;
+  } catch (e) {
+    if (e instanceof jwt.TokenExpiredError) throw unauthorized('access token expired: refresh the session or sign in again');
+    throw unauthorized('access token invalid: sign in again');
+  }
+  if (claims.typ !== 'access' || typeof claims.sub !== 'string' || typeof claims.exp !== 'number') throw unauthorized('access token invalid: sign in again');
+  if (verified.size >= MAX_VERIFIED) verified.clear();
+  verified.set(key, claims);
+  return claims;
 }
 
 export function signAccessToken(user: AuthUser, secret: string, ttlSeconds: number): string {
@@ -59,14 +89,7 @@ export function requireAccess(access: Access, ds: DataSource, secret: string): R
     const header = req.headers.authorization;
     if (!header || !/^Bearer\s+\S+$/i.test(header)) throw unauthorized();
     const token = header.replace(/^Bearer\s+/i, '');
-    let claims: AccessClaims;
-    try {
-      claims = jwt.verify(token, secret, { algorithms: ['HS256'], issuer: 'tessera' }) as unknown as AccessClaims;
-    } catch (e) {
-      if (e instanceof jwt.TokenExpiredError) throw unauthorized('access token expired: refresh the session or sign in again');
-      throw unauthorized('access token invalid: sign in again');
-    }
-    if (claims.typ !== 'access' || typeof claims.sub !== 'string') throw unauthorized('access token invalid: sign in again');
+    const claims = verifyAccessToken(token, secret);
     // Plain SQL: this runs on every authenticated request and needs five columns, not an entity.
     const [user]: { id: string; email: string; display_name: string; role: Role; disabled: number }[] = await ds.query(
       'SELECT "id", "email", "display_name", "role", "disabled" FROM "user" WHERE "id" = ?',

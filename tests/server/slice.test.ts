@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { LibraryListResponseSchema } from '../../shared/api/library';
 import { SessionResponseSchema } from '../../shared/api/auth';
 import { createApp } from '../../server/app';
@@ -35,6 +35,20 @@ describe('thin slice: sign-in and library list', () => {
     const res = await request(s.app).get('/api/library').set('Authorization', `Bearer ${expired}`);
     expect(res.status).toBe(401);
     expect(res.body.error.message).toBe('access token expired: refresh the session or sign in again');
+  });
+
+  it('when a token that already worked runs out, then the next request is refused as expired', async () => {
+    const session = await signIn(s.app, 'student');
+    expect((await request(s.app).get('/api/library').set('Authorization', `Bearer ${session.accessToken}`)).status).toBe(200);
+    const now = Date.now();
+    const clock = vi.spyOn(Date, 'now').mockReturnValue(now + 16 * 60 * 1000); // past the 15-minute lifetime
+    try {
+      const res = await request(s.app).get('/api/library').set('Authorization', `Bearer ${session.accessToken}`);
+      expect(res.status).toBe(401);
+      expect(res.body.error.message).toBe('access token expired: refresh the session or sign in again');
+    } finally {
+      clock.mockRestore();
+    }
   });
 
   it('when the password is wrong, then sign-in answers 401 bad_credentials', async () => {
