@@ -57,6 +57,15 @@ describe('curator queue and the submitter side', () => {
     expect(problems).toEqual(expect.arrayContaining([expect.objectContaining({ check: 'shiftRange', field: 'signals[0].shift' }), expect.objectContaining({ check: 'formula' })]));
   });
 
+  it('when the SMILES disagrees with the formula, then the checks say so (openchemlib reads the SMILES)', async () => {
+    // Ethanol is CCO = C2H6O (common practice); the entry claims C3H8O.
+    const res = await request(s.app).post('/api/submissions').set(bearer(analyst)).send({ entry: demoEntry('demo.q-smiles', { name: 'Demo smiles clash', smiles: 'CCO', formula: 'C3H8O' }) });
+    expect(res.status).toBe(201);
+    const formula = (res.body.submission.checks.problems as { check: string; message: string }[]).filter((p) => p.check === 'formula');
+    expect(formula.length).toBeGreaterThan(0);
+    expect(formula.map((p) => p.message).join(' ')).toMatch(/C2H6O/);
+  });
+
   it('when a curator asks for changes, then the submitter sees the status and comment in their own list and gets an e-mail', async () => {
     const res = await request(s.app).post(`/api/review/submissions/${ids.broken}/decision`).set(bearer(curator)).send({ decision: 'request_changes', version: 1, comment: 'the 25 ppm signal cannot be 1H' });
     expect(res.status).toBe(200);
