@@ -1,5 +1,8 @@
 import type { AmbiguityGroup } from '../../shared/screening';
 
+/** At most this many names in one shadowedBy list (best-ranked first): dense mixtures have many. */
+const MAX_SHADOWERS = 10;
+
 export interface RelatableCandidate {
   entryId: string;
   /** Matched mixture peak indices, ascending. */
@@ -20,8 +23,9 @@ export interface CandidateRelations {
  * the same share of their nuclei (±0.01) cannot be told apart by this peak list: they form one
  * group (ids G1, G2, … in rank order of their best member). A candidate is possibly shadowed when
  * its signals may just be other compounds' multiplets: every peak it matched is matched by one
- * other candidate outside its group (any rank), or jointly by candidates ranked above it (input
- * order is rank order). shadowedBy names those candidates.
+ * other candidate outside its group (any rank; up to 10 named, best-ranked first), or jointly by
+ * candidates ranked above it (input order is rank order; for each peak its best-ranked holder is
+ * named).
  */
 export function candidatesRelate(candidates: readonly RelatableCandidate[]): CandidateRelations {
   const groupOf: Array<string | null> = candidates.map(() => null);
@@ -50,24 +54,30 @@ export function candidatesRelate(candidates: readonly RelatableCandidate[]): Can
     }
   });
   const outside = (i: number, j: number) => j !== i && (groupOf[i] === null || groupOf[i] !== groupOf[j]);
+  const peakSets = candidates.map((c) => new Set(c.peaks));
   const shadowedBy = candidates.map((c, i) => {
     if (c.peaks.length === 0) return [];
-    // One candidate holding every peak of this one.
-    let common: number[] = (byPeak.get(c.peaks[0]) ?? []).filter((j) => outside(i, j));
-    for (const p of c.peaks.slice(1)) {
-      if (common.length === 0) break;
-      const here = new Set(byPeak.get(p) ?? []);
-      common = common.filter((j) => here.has(j));
-    }
-    if (common.length > 0) return common.map((j) => candidates[j].entryId);
-    // Several better-ranked candidates holding them together.
-    const above = new Set<number>();
+    // One candidate holding every peak of this one: look among the holders of its rarest peak.
+    let rarest = byPeak.get(c.peaks[0]) ?? [];
     for (const p of c.peaks) {
-      const holders = (byPeak.get(p) ?? []).filter((j) => j < i && outside(i, j));
-      if (holders.length === 0) return [];
-      for (const j of holders) above.add(j);
+      const h = byPeak.get(p) ?? [];
+      if (h.length < rarest.length) rarest = h;
     }
-    return [...above].sort((a, b) => a - b).map((j) => candidates[j].entryId);
+    const whole: number[] = [];
+    for (const j of rarest) {
+      if (!outside(i, j)) continue;
+      if (c.peaks.every((p) => peakSets[j].has(p))) whole.push(j);
+      if (whole.length >= MAX_SHADOWERS) break;
+    }
+    if (whole.length > 0) return whole.map((j) => candidates[j].entryId);
+    // Else several better-ranked candidates together: for each peak its best-ranked other holder.
+    const cover = new Set<number>();
+    for (const p of c.peaks) {
+      const holder = (byPeak.get(p) ?? []).find((j) => j < i && outside(i, j));
+      if (holder === undefined) return [];
+      cover.add(holder);
+    }
+    return [...cover].sort((a, b) => a - b).map((j) => candidates[j].entryId);
   });
   return { groups, groupOf, shadowedBy };
 }

@@ -1,13 +1,11 @@
-import { CAUTION_TEXT } from '../../shared/caution';
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Mixture } from '../../shared/mixture';
-import { DEFAULT_TOLERANCE_PPM } from '../../shared/nucleus';
-import type { ScreenCandidate, ScreenOptions, ScreenResult, SignalEvidence, UnmatchedSignal } from '../../shared/screening';
-import { mixturePeaks } from '../peaks/mixturePeaks';
+import type { ScreenOptions, ScreenResult } from '../../shared/screening';
 import { entryScore, type SignalMatchSummary } from '../score/entryScore';
-import { candidatesRelate } from './candidatesRelate';
 import { libraryIndexCached } from './libraryIndexCached';
-import { libraryIndexEntryMatch, type SignalMatch } from './libraryIndexEntryMatch';
+import { libraryIndexEntryMatch } from './libraryIndexEntryMatch';
+import { inRegions, screenResultAssemble, type EntryFound } from './screenResultAssemble';
+import { screenPrepare } from './screenPrepare';
 
 /**
  * Screens a mixture against library entries by tolerance-windowed matching and returns ranked
@@ -22,33 +20,11 @@ import { libraryIndexEntryMatch, type SignalMatch } from './libraryIndexEntryMat
  * See matching/score/entryScore.ts for the score.
  */
 export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options: ScreenOptions = {}): ScreenResult {
-  if (!mixture || (mixture.kind !== 'peaks' && mixture.kind !== 'spectrum')) throw new TypeError('mixture must be a peak list or a spectrum (kind "peaks" or "spectrum")');
-  if (!Array.isArray(entries)) throw new TypeError('entries must be an array of library entries');
-  if (!(mixture.mhz > 0)) throw new RangeError(`mixture spectrometer frequency must be positive, got ${mixture.mhz}`);
-  const tol = options.tolerancePpm ?? DEFAULT_TOLERANCE_PPM[mixture.nucleus];
-  const minScore = options.minScore ?? 0.5;
-  if (!(tol > 0) || !Number.isFinite(tol)) throw new RangeError(`tolerancePpm must be a positive number, got ${tol}`);
-  if (!(minScore >= 0 && minScore <= 1)) throw new RangeError(`minScore must be between 0 and 1, got ${minScore}`);
-  if (options.maxCandidates !== undefined && !(Number.isInteger(options.maxCandidates) && options.maxCandidates > 0)) {
-    throw new RangeError(`maxCandidates must be a positive integer, got ${options.maxCandidates}`);
-  }
-
-  const set = mixturePeaks(mixture, {
-    tolerancePpm: tol,
-    excludeSolvent: options.excludeSolvent ?? true,
-    waterHalfWidthPpm: options.waterHalfWidthPpm,
-    excludeReference: options.excludeReference ?? true,
-    snrThreshold: options.snrThreshold ?? 3,
-  });
-  // Shifts move with the solvent (Fulmer 2010: median spread 0.3 ppm across solvents), so a named
-  // solvent screens only entries recorded in it (and solvent-neutral "other" entries).
-  const solvent = !(options.anySolvent ?? false) && mixture.solvent !== 'other' ? mixture.solvent : undefined;
-  const index = libraryIndexCached(entries, mixture.nucleus, mixture.mhz, { includeRetired: options.includeRetired ?? false, ...(solvent ? { solvent } : {}) });
-  const shifts = Float64Array.from(set.used, (p) => p.shift);
-  const intensities = Float64Array.from(set.used, (p) => p.intensity);
-
+  const prep = screenPrepare(mixture, entries, options);
+  const { tol, minScore, shifts, intensities, set } = prep;
+  const index = libraryIndexCached(entries, mixture.nucleus, mixture.mhz, { includeRetired: prep.includeRetired, ...(prep.solvent ? { solvent: prep.solvent } : {}) });
   const touched = indexHits(index, shifts, tol, set.regions);
-  const found: Array<{ e: number; matches: SignalMatch[]; score: ReturnType<typeof entryScore> }> = [];
+  const found: EntryFound[] = [];
   const { hitRequired, hitExchangeable } = index.scratch;
   for (const e of touched) {
     // Upper bound of E (hidden signals counted as found); score ≤ E².
@@ -65,50 +41,11 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
       intensity: m.intensity,
     }));
     const score = entryScore(summaries, { tolerancePpm: tol });
-    if (score.score > 0 && score.score >= minScore) found.push({ e, matches, score });
+    if (score.score > 0 && score.score >= minScore) {
+      found.push({ entry: index.entries[e], matches: matches.map((m) => ({ ...m, signalIndex: index.sigSource[m.signal] })), score });
+    }
   }
-  found.sort(
-    (a, b) =>
-      b.score.score - a.score.score ||
-      b.score.explainedShare - a.score.explainedShare ||
-      (index.entries[a.e].id < index.entries[b.e].id ? -1 : index.entries[a.e].id > index.entries[b.e].id ? 1 : 0),
-  );
-
-  const peakSets = found.map((f) => [...new Set(f.matches.flatMap((m) => m.peaks))].sort((x, y) => x - y));
-  const relations = candidatesRelate(found.map((f, i) => ({ entryId: index.entries[f.e].id, peaks: peakSets[i], explainedShare: f.score.explainedShare })));
-  let candidates: ScreenCandidate[] = found.map((f, i) => candidateBuild(index.entries[f.e], f, i, index.sigSource, set.regions));
-  candidates.forEach((c, i) => {
-    c.ambiguityGroup = relations.groupOf[i];
-    c.shadowedBy = relations.shadowedBy[i];
-  });
-  let groups = relations.groups;
-  if (options.maxCandidates !== undefined && candidates.length > options.maxCandidates) {
-    candidates = candidates.slice(0, options.maxCandidates);
-    const kept = new Set(candidates.map((c) => c.ambiguityGroup));
-    groups = groups.filter((g) => kept.has(g.id));
-  }
-  const explained = new Set<number>();
-  for (const c of candidates) for (const ev of c.evidence) for (const p of ev.peakIndices) explained.add(p);
-  return {
-    mixtureName: mixture.name,
-    nucleus: mixture.nucleus,
-    mhz: mixture.mhz,
-    tolerancePpm: tol,
-    minScore,
-    noise: set.noise,
-    entriesScreened: index.entries.length,
-    candidates,
-    ambiguityGroups: groups,
-    peaksUsed: set.used,
-    peaksExcluded: set.excluded,
-    unexplainedPeaks: set.used.map((p) => p.index).filter((i) => !explained.has(i)),
-    caution: CAUTION_TEXT,
-  };
-}
-
-function inRegions(shift: number, regions: ReadonlyArray<{ from: number; to: number }>): boolean {
-  for (const r of regions) if (shift >= r.from && shift <= r.to) return true;
-  return false;
+  return screenResultAssemble(mixture, prep, index.entries.length, found);
 }
 
 /**
@@ -160,61 +97,3 @@ function indexHits(index: ReturnType<typeof libraryIndexCached>, shifts: Float64
   return touched;
 }
 
-function candidateBuild(
-  entry: LibraryEntry,
-  f: { matches: SignalMatch[]; score: ReturnType<typeof entryScore> },
-  rankIndex: number,
-  sigSource: Int32Array,
-  regions: ReadonlyArray<{ from: number; to: number }>,
-): ScreenCandidate {
-  const ratios = f.matches.filter((m) => m.linesMatched > 0).map((m) => m.intensity / entry.signals[sigSource[m.signal]].nuclei);
-  const sorted = [...ratios].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  const median = sorted.length === 0 ? 0 : sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
-  const evidence: SignalEvidence[] = [];
-  const unmatched: UnmatchedSignal[] = [];
-  for (const m of f.matches) {
-    const i = sigSource[m.signal];
-    const s = entry.signals[i];
-    const common = {
-      signalIndex: i,
-      ...(s.label !== undefined ? { label: s.label } : {}),
-      shift: s.shift,
-      ...(s.nucleus === '1H' ? { multiplicity: s.multiplicity } : {}),
-      nuclei: s.nuclei,
-      exchangeable: s.nucleus === '1H' && s.exchangeable === true,
-      hidden: inRegions(s.shift, regions),
-    };
-    if (m.linesMatched === 0) {
-      unmatched.push(common);
-      continue;
-    }
-    const perNucleus = m.intensity / s.nuclei;
-    evidence.push({
-      ...common,
-      peakIndices: m.peaks,
-      linesMatched: m.linesMatched,
-      linesExpected: m.linesExpected,
-      deltaPpm: m.deltaPpm,
-      intensity: m.intensity,
-      intensityPerNucleus: perNucleus,
-      ratio: median > 0 ? perNucleus / median : 1,
-    });
-  }
-  return {
-    rank: rankIndex + 1,
-    entryId: entry.id,
-    name: entry.name,
-    category: entry.category,
-    contaminant: entry.category === 'contaminant',
-    score: f.score.score,
-    explainedShare: f.score.explainedShare,
-    shiftFactor: f.score.shiftFactor,
-    intensityFactor: f.score.intensityFactor,
-    intensityCv: f.score.intensityCv,
-    evidence,
-    unmatched,
-    ambiguityGroup: null,
-    shadowedBy: [],
-  };
-}
