@@ -16,7 +16,7 @@ export interface CandidateTableProps {
 /** The ranked candidates; every numeric column sorts. */
 export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: CandidateTableProps) {
   const t = useTheme();
-  const [sort, setSort] = useState<{ key: string; dir: 'asc' | 'desc' }>({ key: 'rank', dir: 'asc' });
+  const [sort, setSort] = useState<{ key: string; dir: 'asc' | 'desc' }>({ key: 'amount', dir: 'desc' });
   const columns = useMemo<Column<CandidateRow>[]>(() => {
     const cols: Column<CandidateRow>[] = [
       { key: 'rank', title: '#', minWidth: 34, flex: 0.4, render: (r) => String(r.rank), sortValue: (r) => r.rank },

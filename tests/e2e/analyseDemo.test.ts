@@ -46,8 +46,11 @@ describe('analyse a demo mixture', () => {
     expect(want.analytes.length).toBeGreaterThan(0);
     const { page, close } = await openBrowser(viewport);
     try {
+      // No library from the server at all: the device starts from the snapshot shipped in the app.
+      await page.route(/\/api\/(sync|library)/, (route) => route.abort('internetdisconnected'));
       await signIn(page, server.url, 'analyst@demo.tessera.test');
       await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await expect.poll(() => page.getByText(/offline or the server is down/).count(), { timeout: 15_000 }).toBeGreaterThan(0);
       await page.goto(`${server.url}/analyse`);
       await page.getByLabel('Mixture from: demo mixtures').click();
       await page.getByLabel(`Demo mixture ${want.title}`).click();
@@ -76,6 +79,32 @@ describe('analyse a demo mixture', () => {
       for (const a of want.analytes) {
         expect(Math.abs(found[a.entryId] / sum - a.analyteMoleFraction!), `${a.name}`).toBeLessThanOrEqual(0.06);
       }
+
+      // Drag across the overlay plot to zoom into a region; then back to the whole spectrum.
+      const plot = page.getByLabel('Overlay plot', { exact: true });
+      await plot.scrollIntoViewIfNeeded();
+      const before = await page.getByLabel('Visible range').first().innerText();
+      const box = (await plot.boundingBox())!;
+      await page.mouse.move(box.x + box.width * 0.3, box.y + box.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(box.x + box.width * 0.5, box.y + box.height / 2, { steps: 5 });
+      await page.mouse.up();
+      await page.getByRole('button', { name: 'Whole spectrum' }).first().waitFor({ timeout: 5_000 });
+      const [hi, lo] = (await page.getByLabel('Visible range').first().innerText()).match(/-?\d+\.\d+/g)!.map(Number);
+      expect(hi).toBeGreaterThan(lo); // ppm decreases to the right
+      expect(await page.getByLabel('Visible range').first().innerText()).not.toBe(before);
+      await page.getByRole('button', { name: 'Whole spectrum' }).first().click();
+
+      const download = page.waitForEvent('download');
+      await page.getByRole('button', { name: 'Export CSV' }).click();
+      const csv = fs.readFileSync((await (await download).path())!, 'utf8');
+      expect(csv).toContain('Identification is tentative');
+      for (const a of want.analytes) expect(csv).toContain(a.entryId);
+
+      await page.getByRole('button', { name: 'Printable report' }).click();
+      await page.getByRole('heading', { name: 'Tessera analysis report' }).waitFor({ timeout: 10_000 });
+      expect(await page.getByLabel('Caution').count()).toBeGreaterThan(0);
+      await screenshot(page, `report-${viewport}`);
 
       // Reopened from the history instantly, from the device database.
       await page.goto(`${server.url}/history`);
