@@ -1,98 +1,30 @@
 import type { LibraryEntry } from '../shared/libraryEntry';
-import { MixtureSchema, type Mixture } from '../shared/mixture';
-import { InputError } from '../matching/io';
-import { mixtureParseFile } from '../matching/io';
-import type { AnalysisSettings, StoredAnalysis } from '../localdb/analyses';
-import { engineAnalyse, engineScreen } from './engine';
-import { newId } from './ids';
+import type { StoredAnalysis } from '../localdb/analyses';
+import { analysisSteps, type AnalysisInput, type AnalysisStage } from './analysisCompute';
 
-export type AnalysisStage = 'reading' | 'screening' | 'fitting' | 'saving';
+export { STAGE_TEXT, type AnalysisInput, type AnalysisStage } from './analysisCompute';
 
-export const STAGE_TEXT: Record<AnalysisStage, string> = {
-  reading: 'Reading the mixture',
-  screening: 'Screening the library',
-  fitting: 'Fitting and quantifying candidates',
-  saving: 'Keeping the result on this device',
-};
-
-export interface AnalysisInput {
-  /** A file's name (its extension picks the reader) or "pasted.txt" for pasted text. */
-  fileName: string;
-  content: string;
-  name?: string;
-  demo?: boolean;
-  settings: AnalysisSettings;
-}
-
-/** Give the browser a frame to paint the progress before the next synchronous engine step. */
+/** Give the UI a frame to paint the progress before the next synchronous engine step. */
 const yieldToUi = () => new Promise<void>((r) => setTimeout(r, 16));
 
-export function analysisMixture(input: AnalysisInput): Mixture {
-  const s = input.settings;
-  if (/\.json$/i.test(input.fileName)) return mixtureFromJson(input);
-  return mixtureParseFile(input.fileName, input.content, {
-    // An undefined key would override the name the reader takes from the file name.
-    ...(input.name ? { name: input.name } : {}),
-    ...(input.demo ? { demo: true } : {}),
-    nucleus: s.nucleus,
-    solvent: s.solvent,
-    mhz: s.mhz,
-  });
-}
-
 /**
- * Runs one analysis on the device in stages, yielding between them so the screen stays
- * responsive and shows which stage is running. Throws InputError (with lines) on bad input.
+ * Runs one analysis on this thread in stages, yielding between them so the screen shows which
+ * stage is running. Used on devices and as the web's fallback when a worker cannot start.
+ * Throws InputError (with lines) on bad input.
  */
-/**
- * Entries recorded in the mixture's solvent: shifts move with the solvent, so an entry measured
- * in another one would match by accident. "other" keeps the whole library.
- */
-export function librarySameSolvent(library: LibraryEntry[], solvent: AnalysisInput['settings']['solvent']): LibraryEntry[] {
-  return solvent === 'other' ? library : library.filter((e) => e.solvent === solvent);
-}
-
-export async function analysisRun(input: AnalysisInput, fullLibrary: LibraryEntry[], onStage: (s: AnalysisStage) => void): Promise<StoredAnalysis> {
-  const library = librarySameSolvent(fullLibrary, input.settings.solvent);
-  if (library.length === 0) throw new Error(`The library on this device has no entries recorded in ${input.settings.solvent}; choose another solvent or sync.`);
+export async function analysisRunHere(input: AnalysisInput, library: LibraryEntry[], onStage: (s: AnalysisStage) => void): Promise<StoredAnalysis> {
+  const steps = analysisSteps(input, library);
   onStage('reading');
   await yieldToUi();
-  const mixture = analysisMixture(input);
+  steps.read();
   onStage('screening');
   await yieldToUi();
-  const screen = engineScreen(mixture, library, { tolerancePpm: input.settings.tolerancePpm });
+  steps.screen();
   onStage('fitting');
   await yieldToUi();
-  const std = input.settings.standard;
-  const report = engineAnalyse(mixture, library, {
-    screen: { tolerancePpm: input.settings.tolerancePpm },
-    ...(std ? { standard: { entryId: std.entryId, concentrationMM: std.concentrationMM } } : {}),
-  });
+  const result = steps.analyse();
   onStage('saving');
-  await yieldToUi();
-  return {
-    id: newId(),
-    name: mixture.name,
-    createdAt: new Date().toISOString(),
-    demo: !!mixture.demo,
-    settings: input.settings,
-    mixture,
-    screen,
-    report,
-    libraryCount: library.length,
-  };
+  return result;
 }
 
-/** A mixture saved as JSON (demo mixtures, exports); the form's settings win over the file's. */
-function mixtureFromJson(input: AnalysisInput): Mixture {
-  let raw: unknown;
-  try {
-    raw = JSON.parse(input.content);
-  } catch (err) {
-    throw new InputError(input.fileName, [{ field: 'file', message: `not valid JSON (${err instanceof Error ? err.message : 'parse error'})` }]);
-  }
-  const r = MixtureSchema.safeParse(raw);
-  if (!r.success) throw new InputError(input.fileName, r.error.issues.slice(0, 10).map((i) => ({ field: i.path.join('.') || 'file', message: i.message })));
-  const s = input.settings;
-  return { ...r.data, name: input.name ?? r.data.name, nucleus: s.nucleus, solvent: s.solvent, mhz: s.mhz, demo: input.demo || r.data.demo };
-}
+export const analysisRun = analysisRunHere;

@@ -1,3 +1,4 @@
+import type React from 'react';
 import { useMemo, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { SolventSchema, type Solvent } from '../../shared/solvent';
@@ -18,6 +19,8 @@ export interface AnalyseFormProps {
   library: LibraryEntry[];
   busy: boolean;
   onRun(input: AnalysisInput): void;
+  /** Progress or problems of the last run, shown just above the run button where the eye is. */
+  status?: React.ReactNode;
 }
 
 function numberOrNull(s: string): number | null {
@@ -26,7 +29,7 @@ function numberOrNull(s: string): number | null {
 }
 
 /** Where the mixture comes from and how to read it; every field names its own problem. */
-export function AnalyseForm({ library, busy, onRun }: AnalyseFormProps) {
+export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) {
   const t = useTheme();
   const [source, setSource] = useState<Source>('paste');
   const [text, setText] = useState('');
@@ -168,6 +171,7 @@ export function AnalyseForm({ library, busy, onRun }: AnalyseFormProps) {
         options={[{ value: 'none', text: 'none' }, ...standards.map((s) => ({ value: s.id, text: s.name.replace(/\s*\(.*\)$/, '') }))]}
       />
       {stdId !== 'none' ? <TextField label="Standard concentration (mmol/L)" keyboardType="decimal-pad" value={stdConc} onChangeText={setStdConc} error={errors.std} /> : null}
+      {status}
       <Button label="Run analysis" busy={busy} onPress={run} />
     </View>
   );

@@ -58,6 +58,9 @@ describe('analyse a demo mixture', () => {
       await page.getByRole('button', { name: 'Run analysis' }).click();
       await page.getByLabel('Candidates').first().waitFor({ timeout: 90_000 });
       await page.getByLabel('Caution').first().waitFor();
+      // The engine ran in the web worker Metro bundled for it, not on the page's thread.
+      const scripts = await page.evaluate(() => performance.getEntriesByType('resource').map((e) => e.name));
+      expect(scripts.some((u) => /\/analysis-[0-9a-f]+\.js$/.test(u))).toBe(true);
       expect(await overflowsHorizontally(page)).toBe(false);
       await screenshot(page, `result-${viewport}`);
 
@@ -111,6 +114,28 @@ describe('analyse a demo mixture', () => {
       await page.getByLabel(`Open analysis ${want.title}`).click();
       await page.getByLabel('Candidates').first().waitFor({ timeout: 10_000 });
       await screenshot(page, `history-${viewport}`);
+    } finally {
+      await close();
+    }
+  });
+
+  it('when a pasted peak list has bad lines, then each is named and nothing is kept in the history', async () => {
+    const { page, close } = await openBrowser('phone');
+    try {
+      await signIn(page, server.url, 'student@demo.tessera.test');
+      await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await page.goto(`${server.url}/analyse`);
+      await page.getByRole('textbox', { name: 'Peak list' }).fill('3.21, 100\n1.x3, 45\n4.11, -30');
+      await page.getByRole('button', { name: 'Run analysis' }).click();
+      const problems = page.getByLabel('Analysis problems');
+      await problems.waitFor({ timeout: 30_000 });
+      const text = await problems.innerText();
+      expect(text).toContain('nothing was saved');
+      expect(text).toMatch(/Line 2/);
+      expect(text).toMatch(/Line 3/);
+      await screenshot(page, 'analyse-bad-input-phone');
+      await page.goto(`${server.url}/history`);
+      await page.getByText(/No analyses yet/).waitFor({ timeout: 10_000 });
     } finally {
       await close();
     }

@@ -94,4 +94,34 @@ describe('submit offline, sync, approve, sync back', () => {
       await curator.close();
     }
   });
+
+  it('when the connection drops after the first page of library changes, then the next sync resumes from the stored cursor', async () => {
+    const { page, close } = await openBrowser('wide');
+    try {
+      const pulls: string[] = [];
+      page.on('request', (r) => {
+        if (r.url().includes('/api/sync/changes')) pulls.push(r.url());
+      });
+      // Every page after the first fails as if the network went away mid-sync.
+      await page.route(/\/api\/sync\/changes\?.*cursor=/, (route) => route.abort('internetdisconnected'));
+      await signIn(page, server.url, 'student@demo.tessera.test');
+      await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await page.getByRole('link', { name: 'Sync' }).click();
+      await expect.poll(() => page.getByText(/offline or the server is down/).count(), { timeout: 20_000 }).toBeGreaterThan(0);
+      const first = pulls.find((u) => !u.includes('cursor='));
+      expect(first, 'the first pull starts from the beginning').toBeDefined();
+      const cursorAfterFirstPage = new URL(pulls.find((u) => u.includes('cursor='))!).searchParams.get('cursor');
+      expect(cursorAfterFirstPage).toBeTruthy();
+
+      await page.unroute(/\/api\/sync\/changes\?.*cursor=/);
+      pulls.length = 0;
+      await page.getByRole('button', { name: 'Sync now' }).click();
+      await expect.poll(() => page.getByLabel('Last sync outcome').count(), { timeout: 20_000 }).toBe(1);
+      // The round asked from where the broken one stopped, not from the beginning.
+      expect(new URL(pulls[0]).searchParams.get('cursor')).toBe(cursorAfterFirstPage);
+      expect(await page.getByText(/offline or the server is down/).count()).toBe(0);
+    } finally {
+      await close();
+    }
+  });
 });

@@ -16,9 +16,8 @@ export default function AnalyseRoute() {
         library={library.data ?? []}
         busy={run.isPending}
         onRun={(input) => run.mutate(input, { onSuccess: (a) => router.push(`/analyse/${a.id}`) })}
+        status={run.stage ? <RunProgress stage={run.stage} /> : run.isError ? <InputProblems error={run.error} /> : null}
       />
-      {run.stage ? <RunProgress stage={run.stage} /> : null}
-      {run.isError ? <InputProblems error={run.error} /> : null}
     </Screen>
   );
 }
