@@ -76,6 +76,12 @@ export function createApp(deps: AppDeps): TesseraApp {
   );
   app.use('/api', cors({ origin: config.appOrigins, credentials: false, maxAge: 600 }));
   app.use('/api', express.json({ limit: '1mb' }));
+  // API answers carry tokens and personal data: never kept by browsers or proxies (sync pages
+  // relax this to revalidation with their ETag).
+  app.use('/api', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
 
   for (const r of routes) app[r.method](r.path, requireAccess(r.access, ds, config.jwtSecret), ...r.handlers);
   app.use('/api', apiNotFound);

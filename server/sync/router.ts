@@ -18,6 +18,7 @@ export function syncRoutes(ds: DataSource, submissions: SubmissionService): Rout
           const page = await syncChangesPage(ds, q.cursor, q.limit);
           // Express compares the ETag with If-None-Match and answers 304 itself.
           res.type('application/json').setHeader('ETag', page.etag);
+          res.setHeader('Cache-Control', 'private, no-cache');
           res.send(page.body);
         },
       ],

@@ -66,6 +66,7 @@ describe('thin slice: sign-in and library list', () => {
   it('when the demo analyst signs in, then the session matches the shared schema and the library lists the seeded entries by name', async () => {
     const res = await request(s.app).post('/api/auth/sign-in').send({ email: 'Analyst@Demo.Tessera.Test ', password: 'tessera-demo' });
     expect(res.status).toBe(200);
+    expect(res.headers['cache-control']).toBe('no-store');
     const session = SessionResponseSchema.parse(res.body);
     expect(session.user).toMatchObject({ email: 'analyst@demo.tessera.test', role: 'analyst' });
     const lib = await request(s.app).get('/api/library').set('Authorization', `Bearer ${session.accessToken}`);

@@ -157,6 +157,7 @@ describe('sync', () => {
   it('when a client sends the ETag it got, then an unchanged page answers 304 with no body', async () => {
     const first = await pull(undefined, 50);
     expect(first.headers['content-type']).toMatch(/^application\/json/);
+    expect(first.headers['cache-control']).toBe('private, no-cache');
     const again = await request(s.app).get('/api/sync/changes').query({ limit: 50 }).set(bearer(student)).set('If-None-Match', first.headers.etag);
     expect(again.status).toBe(304);
     expect(again.text).toBe('');
