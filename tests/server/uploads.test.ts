@@ -80,6 +80,40 @@ describe('uploads', () => {
     ]);
   });
 
+  it('when the same peak list comes as UTF-16 with a BOM or as Latin-1, then it reads the same', async () => {
+    const utf16 = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(PEAKS_CSV, 'utf16le')]);
+    // 0xE9 (é in Latin-1) is not valid UTF-8 on its own: the decoder must fall back.
+    const latin1 = Buffer.from('shift,integral,note\n1.22,3.0,méthyle\n3.69,2.0,\n2.10,1.0,\n', 'latin1');
+    expect(latin1.includes(0xe9)).toBe(true);
+    const shifts: number[][] = [];
+    for (const [i, bytes] of [utf16, latin1].entries()) {
+      const res = await upload().field('meta', META(`demo.up-enc-${i}`)).attach('file', bytes, 'peaks.csv');
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      shifts.push(res.body.submission.entry.signals.map((x: { shift: number }) => x.shift));
+    }
+    expect(shifts).toEqual([
+      [1.22, 2.1, 3.69],
+      [1.22, 2.1, 3.69],
+    ]);
+  });
+
+  it('when totalNuclei is given, then the peaks share it by intensity', async () => {
+    const res = await upload().field('meta', META('demo.up-total', { totalNuclei: 12 })).attach('file', Buffer.from(PEAKS_CSV), 'peaks.csv');
+    expect(res.status).toBe(201);
+    // 3 : 2 : 1 of 12 nuclei → 6, 4, 2 (sorted by shift: 1.22, 2.10, 3.69)
+    expect(res.body.submission.entry.signals.map((x: { nuclei: number }) => x.nuclei)).toEqual([6, 2, 4]);
+  });
+
+  it('when the same upload is sent twice with one id in meta, then the second answer is the stored submission (200)', async () => {
+    const id = '0b7f3a52-1c2d-4e5f-8a9b-0c1d2e3f4a5b';
+    const first = await upload().field('meta', META('demo.up-idem', { id })).attach('file', Buffer.from(PEAKS_CSV), 'peaks.csv');
+    const second = await upload().field('meta', META('demo.up-idem', { id })).attach('file', Buffer.from(PEAKS_CSV), 'peaks.csv');
+    expect([first.status, second.status]).toEqual([201, 200]);
+    expect(second.body.submission.id).toBe(id);
+    const rows: { n: number }[] = await s.ds.query('SELECT COUNT(*) AS n FROM submission WHERE id = ?', [id]);
+    expect(rows[0].n).toBe(1);
+  });
+
   it('when a JCAMP-DX spectrum is uploaded, then its picked peaks become the signals', async () => {
     // Synthetic spectrum: two Lorentzian lines (areas 3 : 1) at 1.00 and 2.00 ppm, 1 Hz wide at 400 MHz.
     const ppm: number[] = [];
