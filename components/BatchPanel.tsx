@@ -23,7 +23,7 @@ type Row = BatchSummary['rows'][number];
 /** A run of samples with the same settings, summarised as one table. */
 export function BatchPanel() {
   const t = useTheme();
-  const [files, setFiles] = useState<Array<PickedFile & { demo?: boolean }>>([]);
+  const [files, setFiles] = useState<Array<PickedFile & { demo?: boolean; title?: string }>>([]);
   const [solvent, setSolvent] = useState<Solvent>('D2O');
   const [mhz, setMhz] = useState('400');
   const batch = useRunBatchMutation();
@@ -70,6 +70,7 @@ export function BatchPanel() {
         fileName: f.name,
         content: f.content,
         demo: f.demo,
+        name: f.title,
         settings: { nucleus: '1H', solvent, mhz: m, tolerancePpm: DEFAULT_TOLERANCE_PPM['1H'], standard: null },
       })),
     );
@@ -82,7 +83,7 @@ export function BatchPanel() {
         <Button
           label="Demo mixtures in this solvent"
           variant="quiet"
-          onPress={() => setFiles(DEMO_MIXTURES.filter((d) => d.solvent === solvent).map((d) => ({ name: d.fileName, content: d.content, demo: true })))}
+          onPress={() => setFiles(DEMO_MIXTURES.filter((d) => d.solvent === solvent).map((d) => ({ name: d.fileName, content: d.content, demo: true, title: d.title })))}
         />
       </View>
       <Text accessibilityLabel="Batch files" style={[styles.small, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>

@@ -14,6 +14,14 @@ export interface CandidateTableProps {
 }
 
 /** The ranked candidates; every numeric column sorts. */
+/** Standards and shift references are fitted but not counted among the mixture's compounds. */
+function amountText(r: CandidateRow): string {
+  if (!r.amount) return '—';
+  if (r.amount.isStandard) return 'standard';
+  if (r.screen.category === 'reference' && r.amount.moleFraction === 0) return 'reference';
+  return withUncertainty(r.amount.moleFraction, r.amount.moleFractionUncertainty);
+}
+
 export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: CandidateTableProps) {
   const t = useTheme();
   const [sort, setSort] = useState<{ key: string; dir: 'asc' | 'desc' }>({ key: 'amount', dir: 'desc' });
@@ -43,7 +51,7 @@ export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: Cand
         sortValue: (r) => r.amount?.moleFraction ?? -1,
         render: (r) => (
           <Text accessibilityLabel={`Amount of ${r.name}`} style={{ color: t.colours.text, fontFamily: t.fonts.regular, fontSize: 13 }}>
-            {r.amount && !r.amount.isStandard ? withUncertainty(r.amount.moleFraction, r.amount.moleFractionUncertainty) : '—'}
+            {amountText(r)}
           </Text>
         ),
       },
@@ -115,7 +123,7 @@ export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: Cand
             <Text style={[styles.fact, { color: t.colours.text, fontFamily: t.fonts.regular }]}>
               mole fraction{' '}
               <Text accessibilityLabel={`Amount of ${r.name}`} style={{ fontFamily: t.fonts.semibold }}>
-                {r.amount && !r.amount.isStandard ? withUncertainty(r.amount.moleFraction, r.amount.moleFractionUncertainty) : '—'}
+                {amountText(r)}
               </Text>
               {hasStandard && r.amount?.concentrationMM != null ? ` · ${withUncertainty(r.amount.concentrationMM, r.amount.concentrationUncertaintyMM)} mmol/L` : ''}
             </Text>

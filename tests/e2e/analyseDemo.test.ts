@@ -2,10 +2,11 @@
 // their amounts come back. The expectation is read from library-data/demo-mixtures/manifest.json
 // (written by the demo generator from the recipe), never typed here.
 import fs from 'node:fs';
+import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type RunningServer } from './support/server';
 import { openBrowser, overflowsHorizontally, screenshot, signIn, type ViewportName } from './support/browser';
-import { MODULE_PATH, demoManifest, demoMixturesModuleText } from './support/demoMixturesModule';
+import { DEMO_DIR, MODULE_PATH, demoManifest, demoMixturesModuleText } from './support/demoMixturesModule';
 
 interface Component {
   entryId: string;
@@ -136,6 +137,44 @@ describe('analyse a demo mixture', () => {
       await screenshot(page, 'analyse-bad-input-phone');
       await page.goto(`${server.url}/history`);
       await page.getByText(/No analyses yet/).waitFor({ timeout: 10_000 });
+    } finally {
+      await close();
+    }
+  });
+
+  it('when the analyst chooses a JCAMP-DX spectrum file and runs a batch of demo peak lists, then both give results', async () => {
+    // The honey sample's simulated spectrum (400 MHz); the app's job here is the file path, the
+    // engine's demo tests cover the harder spectra.
+    const m = demoManifest().mixtures.find((x) => x.id === 'demo-01-honey-WV-H-0412' && x.files.spectrum)!;
+    const { page, close } = await openBrowser('wide');
+    try {
+      await signIn(page, server.url, 'analyst@demo.tessera.test');
+      await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await page.goto(`${server.url}/analyse`);
+      await page.getByLabel('Mixture from: a file').click();
+      const chooser = page.waitForEvent('filechooser');
+      await page.getByRole('button', { name: 'Choose a mixture file' }).click();
+      await (await chooser).setFiles(path.join(DEMO_DIR, m.files.spectrum!));
+      await expect.poll(() => page.getByLabel('Chosen file').innerText(), { timeout: 10_000 }).toContain(m.files.spectrum!);
+      await page.getByLabel(`Solvent: ${m.solvent}`).click();
+      await page.getByLabel('Spectrometer (MHz)').fill(String(m.mhz));
+      await page.getByRole('button', { name: 'Run analysis' }).click();
+      await page.getByLabel('Candidates').first().waitFor({ timeout: 90_000 });
+      const analytes = (m.components as Array<{ name: string; role: string }>).filter((c) => c.role === 'analyte');
+      for (const a of analytes) expect(await page.getByLabel(`Candidate ${a.name}`, { exact: true }).innerText()).toContain('confirmed by fit');
+      await screenshot(page, 'result-spectrum-wide');
+
+      const d2o = demoManifest().mixtures.filter((x) => x.solvent === 'D2O' && x.files.peaks);
+      await page.goto(`${server.url}/batch`);
+      await page.getByLabel('Solvent of the run: D2O').click();
+      await page.getByRole('button', { name: 'Demo mixtures in this solvent' }).click();
+      await expect.poll(() => page.getByLabel('Batch files').innerText()).toContain(`${d2o.length} files`);
+      await page.getByRole('button', { name: 'Run the batch' }).click();
+      const table = page.getByLabel('Batch summary');
+      await table.waitFor({ timeout: 120_000 });
+      const text = await table.innerText();
+      for (const x of d2o) expect(text).toContain(x.name);
+      await screenshot(page, 'batch-result-wide');
     } finally {
       await close();
     }
