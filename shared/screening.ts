@@ -15,7 +15,7 @@ export const ScreenOptionsSchema = z.object({
   snrThreshold: z.number().positive().optional().describe('minimum S/N for a picked spectrum peak; default 3 (ICH Q2(R1) common practice)'),
   includeRetired: z.boolean().optional().describe('screen retired entries too; default false'),
   anySolvent: z.boolean().optional().describe('also screen entries recorded in another solvent; default false (shifts move with the solvent)'),
-  maxCandidates: z.number().int().positive().optional().describe('report at most this many candidates; default all'),
+  maxCandidates: z.number().int().positive().optional().describe('report at most this many candidates (best first); default 100'),
 });
 export type ScreenOptions = z.infer<typeof ScreenOptionsSchema>;
 
@@ -108,6 +108,7 @@ export const ScreenResultSchema = z.object({
   noise: z.number().finite().nullable().describe('noise standard deviation of a spectrum; null for a peak list'),
   entriesScreened: z.number().int().nonnegative(),
   candidates: z.array(ScreenCandidateSchema),
+  candidatesAboveThreshold: z.number().int().nonnegative().describe('how many entries reached minScore; more than candidates.length when maxCandidates cut the list'),
   ambiguityGroups: z.array(AmbiguityGroupSchema),
   peaksUsed: z.array(UsedPeakSchema),
   peaksExcluded: z.array(ExcludedPeakSchema),

@@ -111,6 +111,7 @@ export function screenResultTable(r: ScreenResult): string {
   const out: string[] = [];
   out.push(`Mixture "${r.mixtureName}" (${r.nucleus}, ${r.mhz} MHz): ${r.peaksUsed.length} peaks used, ${r.peaksExcluded.length} set aside, ${r.entriesScreened} entries screened, tolerance ±${r.tolerancePpm} ppm, threshold ${r.minScore}`);
   if (r.candidates.length === 0) out.push('No candidate reaches the threshold.');
+  else if (r.candidatesAboveThreshold > r.candidates.length) out.push(`${r.candidatesAboveThreshold} entries reach the threshold; the best ${r.candidates.length} are shown.`);
   else {
     const rows = r.candidates.map((c) => {
       const flags = [c.contaminant ? 'contaminant' : '', c.ambiguityGroup ? `group ${c.ambiguityGroup}` : '', c.shadowedBy.length ? `shadowed by ${c.shadowedBy.join(', ')}` : '']

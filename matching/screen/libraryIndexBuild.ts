@@ -107,7 +107,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     maxShift = Math.max(maxShift, sigHi[k]);
   });
   lineStart[S] = l;
-  const sigLines: MultipletLines[] = sigs.map((s, k) => ({ centre: s.shift, ppm: linePpm.subarray(lineStart[k], lineStart[k + 1]), weight: lineWeight.subarray(lineStart[k], lineStart[k + 1]) }));
+  const sigLines: MultipletLines[] = sigs.map((s, k) => ({ centre: s.shift, ppm: linePpm.subarray(lineStart[k], lineStart[k + 1]), weight: lineWeight.subarray(lineStart[k], lineStart[k + 1])}));
   for (let e = 0; e < kept.length; e++) {
     let req = 0;
     let all = 0;

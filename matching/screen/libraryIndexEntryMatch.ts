@@ -1,15 +1,9 @@
-import { multipletsMatchPeaks, type MultipletLines } from '../score/multipletsMatchPeaks';
+import { multipletsMatchPeaks, type MultipletLines, type MultipletPeakMatch } from '../score/multipletsMatchPeaks';
 import type { LibraryIndex } from './libraryIndexBuild';
 
-export interface SignalMatch {
+export interface SignalMatch extends MultipletPeakMatch {
   /** Signal position in the index (global). */
   signal: number;
-  /** Matched peak indices (into the sorted peak arrays), ascending. */
-  peaks: number[];
-  linesMatched: number;
-  linesExpected: number;
-  deltaPpm: number;
-  intensity: number;
 }
 
 /** Matches one indexed entry's multiplets to the sorted mixture peaks (see multipletsMatchPeaks). */

@@ -12,7 +12,8 @@ import { screenPrepare } from './screenPrepare';
  * candidates with their evidence. Defaults (ScreenOptions): tolerancePpm DEFAULT_TOLERANCE_PPM
  * per nucleus (1H 0.03, 13C 0.5), excludeSolvent true, excludeReference true, minScore 0.5,
  * snrThreshold 3, includeRetired false, anySolvent false (a mixture in a named solvent is screened
- * against entries recorded in that solvent, plus entries recorded as "other"), maxCandidates all.
+ * against entries recorded in that solvent, plus entries recorded as "other"), maxCandidates 100
+ * (the best; candidatesAboveThreshold says how many reached minScore).
  *
  * Cost: the library's shift index is built once per library array (libraryIndexCached); each
  * peak visits only the index bins within its window, and an entry is matched in full only when

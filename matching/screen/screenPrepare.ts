@@ -8,7 +8,7 @@ import { mixturePeaks, type MixturePeakSet } from '../peaks/mixturePeaks';
 export interface ScreenPrepared {
   tol: number;
   minScore: number;
-  maxCandidates: number | undefined;
+  maxCandidates: number;
   includeRetired: boolean;
   /** Entries must be recorded in this solvent (or "other"); undefined: any solvent. */
   solvent: Solvent | undefined;
@@ -20,7 +20,7 @@ export interface ScreenPrepared {
 /**
  * Checks the inputs of a screening, applies the ScreenOptions defaults (tolerancePpm
  * DEFAULT_TOLERANCE_PPM[nucleus], excludeSolvent true, excludeReference true, minScore 0.5,
- * snrThreshold 3, includeRetired false, anySolvent false, maxCandidates all) and prepares the
+ * snrThreshold 3, includeRetired false, anySolvent false, maxCandidates 100) and prepares the
  * mixture peaks. Shared by screenMixture and the all-pairs baseline so both answer alike.
  */
 export function screenPrepare(mixture: Mixture, entries: readonly LibraryEntry[], options: ScreenOptions): ScreenPrepared {
@@ -47,7 +47,7 @@ export function screenPrepare(mixture: Mixture, entries: readonly LibraryEntry[]
   return {
     tol,
     minScore,
-    maxCandidates: options.maxCandidates,
+    maxCandidates: options.maxCandidates ?? 100,
     includeRetired: options.includeRetired ?? false,
     solvent,
     set,

@@ -16,24 +16,23 @@ export interface EntryFound {
 
 /**
  * Turns scored entries into the ScreenResult: ranking (score, then explained share, then id),
- * evidence and unmatched multiplets per candidate, ambiguity groups, shadowing, the maxCandidates
- * cut, unexplained peaks and the caution.
+ * the maxCandidates cut, evidence and unmatched multiplets per candidate, ambiguity groups and
+ * shadowing among the reported candidates, unexplained peaks and the caution.
  */
-export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, entriesScreened: number, found: EntryFound[]): ScreenResult {
+export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, entriesScreened: number, scored: EntryFound[]): ScreenResult {
+  let found = scored;
   found.sort((a, b) => b.score.score - a.score.score || b.score.explainedShare - a.score.explainedShare || (a.entry.id < b.entry.id ? -1 : a.entry.id > b.entry.id ? 1 : 0));
+  const aboveThreshold = found.length;
+  // Groups and shadowing are worked out among the reported candidates only.
+  if (found.length > prep.maxCandidates) found = found.slice(0, prep.maxCandidates);
   const peakSets = found.map((f) => [...new Set(f.matches.flatMap((m) => m.peaks))].sort((x, y) => x - y));
   const relations = candidatesRelate(found.map((f, i) => ({ entryId: f.entry.id, peaks: peakSets[i], explainedShare: f.score.explainedShare })));
-  let candidates: ScreenCandidate[] = found.map((f, i) => candidateBuild(f, i, prep.set.regions));
+  const candidates: ScreenCandidate[] = found.map((f, i) => candidateBuild(f, i, prep.set.regions));
   candidates.forEach((c, i) => {
     c.ambiguityGroup = relations.groupOf[i];
     c.shadowedBy = relations.shadowedBy[i];
   });
-  let groups = relations.groups;
-  if (prep.maxCandidates !== undefined && candidates.length > prep.maxCandidates) {
-    candidates = candidates.slice(0, prep.maxCandidates);
-    const kept = new Set(candidates.map((c) => c.ambiguityGroup));
-    groups = groups.filter((g) => kept.has(g.id));
-  }
+  const groups = relations.groups;
   const explained = new Set<number>();
   for (const c of candidates) for (const ev of c.evidence) for (const p of ev.peakIndices) explained.add(p);
   return {
@@ -45,6 +44,7 @@ export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, ent
     noise: prep.set.noise,
     entriesScreened,
     candidates,
+    candidatesAboveThreshold: aboveThreshold,
     ambiguityGroups: groups,
     peaksUsed: prep.set.used,
     peaksExcluded: prep.set.excluded,

@@ -201,6 +201,16 @@ describe('screenMixture: signals', () => {
   it('caps the report at maxCandidates', () => {
     const r = screenMixture(tableMixture('CDCl3', [{ name: 'ethyl acetate', amount: 1 }, { name: 'toluene', amount: 1 }], split), tableLibrary('CDCl3'), { maxCandidates: 1 });
     expect(r.candidates.map((c) => c.name)).toEqual(['ethyl acetate']);
+    expect(r.candidatesAboveThreshold).toBe(3); // ethyl acetate, toluene, tert-butyl alcohol (shadowed)
+  });
+
+  it('reports at most 100 candidates by default and says how many reached the threshold', () => {
+    const lib = Array.from({ length: 150 }, (_, i) => entry(`s${i}`, [{ shift: 2.17, nuclei: 3 }]));
+    const r = screenMixture({ ...empty, peaks: [{ shift: 2.17, intensity: 3 }] }, lib);
+    expect(r.candidates).toHaveLength(100);
+    expect(r.candidatesAboveThreshold).toBe(150);
+    expect(r.ambiguityGroups).toHaveLength(1);
+    expect(r.ambiguityGroups[0].members).toHaveLength(100);
   });
 });
 
