@@ -12,6 +12,7 @@ export const FitOptionsSchema = z.object({
   cutoff: z.number().positive().max(0.1).optional().describe('a spectrum column is evaluated where a line exceeds cutoff × its height (default 1e-9: Lorentzian tails are long; larger values trade precision for speed)'),
   noiseLevel: z.number().positive().optional().describe('RMS noise of the mixture intensities; default: estimated (spectra) or unknown (peak lists)'),
   unexplainedFraction: z.number().min(0).max(1).optional().describe('a mixture peak is unexplained when the fit reaches less than this fraction of it (default 0.5)'),
+  curves: z.boolean().optional().describe('return the axis and curves (default true; false leaves them empty, e.g. for decoy fits)'),
   includeExchangeable: z.boolean().optional().describe('simulate OH/NH signals marked exchangeable too (default false: their position and width vary)'),
 });
 export type FitOptions = z.infer<typeof FitOptionsSchema>;

@@ -22,7 +22,7 @@ function mixtureRange(mixture: Mixture, tolerance: number): [number, number] {
 }
 
 /** Screen the library, fit the screened candidates (plus a named standard), and score the fit. */
-function screenAndFit(mixture: Mixture, entries: LibraryEntry[], options: AnalysisOptions, forced: string[], linewidthHz?: number) {
+function screenAndFit(mixture: Mixture, entries: LibraryEntry[], options: AnalysisOptions, forced: string[], linewidthHz?: number, curves = true) {
   const screen = screenMixture(mixture, entries, options.screen ?? {});
   const byId = new Map(entries.map((e) => [e.id, e]));
   const ids = [...new Set([...screen.candidates.map((c) => c.entryId), ...forced.filter((id) => byId.has(id))])];
@@ -30,6 +30,7 @@ function screenAndFit(mixture: Mixture, entries: LibraryEntry[], options: Analys
     tolerancePpm: screen.tolerancePpm,
     ...options.fit,
     ...(linewidthHz !== undefined ? { linewidthHz } : {}),
+    curves,
   });
   return { screen, ids, fit };
 }
@@ -86,7 +87,7 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
   const decoyLibraries = libraryToDecoys(library, { sets, seed: opts.seed ?? 1, range, mhz: mixture.mhz });
   const decoyScores: number[] = [];
   for (const decoys of decoyLibraries) {
-    const run = screenAndFit(mixture, decoys, opts, [], fit.linewidthHz);
+    const run = screenAndFit(mixture, decoys, opts, [], fit.linewidthHz, false);
     const scored = new Map(run.fit.components.map((c) => [c.entryId, score(c)]));
     for (const d of decoys) decoyScores.push(scored.get(d.id) ?? 0);
   }

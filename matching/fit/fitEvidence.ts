@@ -54,7 +54,7 @@ export function fitEvidence(
   // On a grid, the mixture minus the other candidates is one vector: one pass per signal.
   let rest: Float64Array | null = null;
   if (rough.dotLV && fitted && ownCurve) {
-    rest = Float64Array.from(design.mixtureCurve);
+    rest = design.mixtureCurve.slice();
     for (let i = 0; i < rest.length; i++) rest[i] -= fitted[i] - ownCurve[i];
   }
   for (const sig of signals[j]) {

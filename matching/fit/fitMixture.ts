@@ -39,8 +39,8 @@ function prepareSpectrum(ppm: number[], intensity: number[]): Prepared {
   const n = ppm.length;
   if (n !== intensity.length) throw new RangeError(`mixture ppm has ${n} points but intensity has ${intensity.length}`);
   const reversed = n > 1 && ppm[n - 1] < ppm[0];
-  const axis = Float64Array.from(reversed ? [...ppm].reverse() : ppm);
-  const y = Float64Array.from(reversed ? [...intensity].reverse() : intensity);
+  const axis = new Float64Array(reversed ? [...ppm].reverse() : ppm);
+  const y = new Float64Array(reversed ? [...intensity].reverse() : intensity);
   for (let i = 0; i < n; i++) {
     if (!Number.isFinite(axis[i]) || !Number.isFinite(y[i])) throw new RangeError(`mixture point ${reversed ? n - 1 - i : i} is not a finite number`);
     if (i > 0 && !(axis[i] > axis[i - 1])) throw new RangeError(`mixture ppm axis must be strictly monotonic (at point ${reversed ? n - 1 - i : i})`);
@@ -73,6 +73,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     cutoff = 1e-9,
     unexplainedFraction = 0.5,
     includeExchangeable = false,
+    curves: withCurves = true,
   } = parsed.data;
   const freq = nucleusFrequency(nucleus, mixture.mhz);
   const estimate = parsed.data.linewidthHz === undefined ? mixtureEstimateLinewidth(mixture) : null;
@@ -158,8 +159,11 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   let h: Float64Array = new Float64Array(0);
   const solveAndReject = (on: FitDesign, record: boolean): number[] => {
     let act = kept.map((_, i) => i);
+    // Normal equations of every candidate once; each pass takes the rows of those still in.
+    const all = fitNormalEquations(on, current);
     for (let pass = 0; pass < 5; pass++) {
-      ({ G, h } = fitNormalEquations(on, act.map((i) => current[i])));
+      G = act.map((i) => Float64Array.from(act, (k) => all.G[i][k]));
+      h = Float64Array.from(act, (i) => all.h[i]);
       c = nnlsSolve(G, h).x;
       const drop: number[] = [];
       const explained = act.reduce((sum, i, a) => sum + c[a] * on.modelIntensity(current[i]), 0);
@@ -286,7 +290,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
       resolvedLines: ev.resolvedLines,
       snr,
       belowQuantitationLimit: snr !== null && snr < QUANTITATION_SNR,
-      curve: prepared ? maybeReverse(curves[a], prepared.reversed) : toPlainArray(curves[a]),
+      curve: !withCurves ? [] : prepared ? maybeReverse(curves[a], prepared.reversed) : toPlainArray(curves[a]),
     };
   });
 
@@ -322,7 +326,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     unexplainedPeaks.splice(0, unexplainedPeaks.length, ...distinct);
   }
 
-  const out = (a: Float64Array) => (prepared ? maybeReverse(a, prepared.reversed) : toPlainArray(a));
+  const out = (a: Float64Array) => (!withCurves ? [] : prepared ? maybeReverse(a, prepared.reversed) : toPlainArray(a));
   return {
     kind: mixture.kind,
     linewidthHz,

@@ -49,7 +49,7 @@ export function linesAt(lines: FitLine[], x: number): number {
 
 /** Copies a typed array into a plain array (JSON output) faster than Array.from. */
 export function toPlainArray(a: Float64Array): number[] {
-  const out = new Array<number>(a.length);
+  const out = new Array<number>(a.length).fill(0); // packed from the start: faster to fill
   for (let i = 0; i < a.length; i++) out[i] = a[i];
   return out;
 }

@@ -4,8 +4,8 @@ import type { NnlsOptions, NnlsResult } from './nnlsSolve';
 function leastSquares(A: Float64Array[], cols: number[], b: Float64Array): Float64Array | null {
   const m = b.length;
   const p = cols.length;
-  const R = cols.map((c) => Float64Array.from(A[c]));
-  const y = Float64Array.from(b);
+  const R = cols.map((c) => A[c].slice());
+  const y = b.slice();
   for (let k = 0; k < p; k++) {
     const v = R[k];
     let norm = 0;

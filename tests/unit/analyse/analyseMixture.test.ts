@@ -4,6 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseMixture } from '../../../matching/analyse/analyseMixture';
 import { libraryToDecoys } from '../../../matching/confidence/libraryToDecoys';
+import { AnalysisReportSchema } from '../../../shared/analysis';
 import { CAUTION_TEXT } from '../../../shared/caution';
 import type { LibraryEntry } from '../../../shared/libraryEntry';
 import { contaminantLibrary, synthPeaks, synthSpectrum } from '../fit/contaminantLibrary';
@@ -24,6 +25,8 @@ describe('analyseMixture', () => {
   it('recovers the composition of a peak list and gives multiplet-confirmed compounds small q-values', () => {
     const r = analyseMixture(synthPeaks(parts), lib);
     expect(r.caution).toBe(CAUTION_TEXT);
+    // The report is the shape shared/analysis.ts declares (no NaN, no missing fields).
+    expect(AnalysisReportSchema.safeParse(JSON.parse(JSON.stringify(r))).success).toBe(true);
     expect(r.fit.components.map((c) => c.entryId).sort()).toEqual(Object.keys(truth).sort());
     for (const c of r.fit.components) expect(c.amountPerNucleus).toBeCloseTo(truth[c.entryId], 2);
     const q = new Map(r.qValues.map((x) => [x.entryId, x.qValue]));
@@ -92,6 +95,7 @@ describe('analyseMixture', () => {
     const mix = synthSpectrum(Object.entries(four).map(([id, amount]) => ({ entry: get(id), amount })), { noise: 0.01, points: 32768 });
     const r = analyseMixture(mix, lib, { decoySets: 5 });
     expect(r.fit.kind).toBe('spectrum');
+    expect(AnalysisReportSchema.safeParse(JSON.parse(JSON.stringify(r))).success).toBe(true);
     for (const [id, amount] of Object.entries(four)) {
       const c = r.fit.components.find((x) => x.entryId === id);
       expect(c, id).toBeDefined();

@@ -4,6 +4,7 @@
 // (Pascal intensities, formulas.md (c); Lorentzian of ml-peak-shape-generator, formulas.md (a)).
 import { describe, expect, it } from 'vitest';
 import { fitMixture } from '../../../matching/fit/fitMixture';
+import { FitResultSchema } from '../../../shared/analysis';
 import type { Mixture } from '../../../shared/mixture';
 import { contaminantLibrary, synthPeaks, synthSpectrum } from './contaminantLibrary';
 
@@ -45,6 +46,14 @@ describe('fitMixture', () => {
     if (mix.kind !== 'spectrum') throw new Error('spectrum expected');
     mix.ppm[10] = mix.ppm[8];
     expect(() => fitMixture(mix, lib)).toThrow('mixture ppm axis must be strictly monotonic (at point 10)');
+  }, T);
+  it('with no candidates, leaves the whole mixture as residual (R² = 0)', () => {
+    const mix = synthSpectrum(parts, { points: 2048 });
+    const r = fitMixture(mix, [], { linewidthHz: 1 });
+    expect(r.components).toEqual([]);
+    expect(r.rSquared).toBe(0);
+    expect(r.residual).toEqual(r.mixtureCurve);
+    expect(FitResultSchema.safeParse(r).success).toBe(true);
   }, T);
   it('reports a candidate without lines in the nucleus as rejected', () => {
     const r = fitMixture({ ...synthPeaks(parts), nucleus: '13C' }, [get('acetone')]);
