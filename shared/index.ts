@@ -11,3 +11,7 @@ export * from './caution';
 export * from './inputIssue';
 export * from './screening';
 export * from './analysis';
+export * from './api/submissions';
+export * from './api/review';
+export * from './api/sync';
+export * from './api/admin';
