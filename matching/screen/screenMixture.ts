@@ -1,10 +1,10 @@
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Mixture } from '../../shared/mixture';
 import type { ScreenOptions, ScreenResult } from '../../shared/screening';
-import { entryScore, type SignalMatchSummary } from '../score/entryScore';
+import { entryScore, type EntryScore, type SignalMatchSummary } from '../score/entryScore';
 import { libraryIndexCached } from './libraryIndexCached';
-import { libraryIndexEntryMatch } from './libraryIndexEntryMatch';
-import { inRegions, screenResultAssemble, type EntryFound } from './screenResultAssemble';
+import { libraryIndexEntryMatch, type SignalMatch } from './libraryIndexEntryMatch';
+import { entryRankCompare, inRegions, screenResultAssemble, type EntryFound } from './screenResultAssemble';
 import { screenPrepare } from './screenPrepare';
 
 /**
@@ -25,7 +25,8 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
   const { tol, minScore, shifts, intensities, set } = prep;
   const index = libraryIndexCached(entries, mixture.nucleus, mixture.mhz, { includeRetired: prep.includeRetired, ...(prep.solvent ? { solvent: prep.solvent } : {}) });
   const touched = indexHits(index, shifts, tol, set.regions);
-  const found: EntryFound[] = [];
+  // Light records while scoring; only the reported best get their evidence built.
+  const scored: Array<{ e: number; matches: SignalMatch[]; score: EntryScore }> = [];
   const { hitRequired, hitExchangeable } = index.scratch;
   for (const e of touched) {
     // Upper bound of E (hidden signals counted as found); score ≤ E².
@@ -42,11 +43,15 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
       intensity: m.intensity,
     }));
     const score = entryScore(summaries, { tolerancePpm: tol });
-    if (score.score > 0 && score.score >= minScore) {
-      found.push({ entry: index.entries[e], matches: matches.map((m) => ({ ...m, signalIndex: index.sigSource[m.signal] })), score });
-    }
+    if (score.score > 0 && score.score >= minScore) scored.push({ e, matches, score });
   }
-  return screenResultAssemble(mixture, prep, index.entries.length, found);
+  scored.sort((a, b) => entryRankCompare(index.entries[a.e].id, a.score, index.entries[b.e].id, b.score));
+  const found: EntryFound[] = scored.slice(0, prep.maxCandidates).map((f) => ({
+    entry: index.entries[f.e],
+    matches: f.matches.map((m) => ({ ...m, signalIndex: index.sigSource[m.signal] })),
+    score: f.score,
+  }));
+  return screenResultAssemble(mixture, prep, index.entries.length, found, scored.length);
 }
 
 /**

@@ -19,10 +19,9 @@ export interface EntryFound {
  * the maxCandidates cut, evidence and unmatched multiplets per candidate, ambiguity groups and
  * shadowing among the reported candidates, unexplained peaks and the caution.
  */
-export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, entriesScreened: number, scored: EntryFound[]): ScreenResult {
+export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, entriesScreened: number, scored: EntryFound[], aboveThreshold = scored.length): ScreenResult {
   let found = scored;
-  found.sort((a, b) => b.score.score - a.score.score || b.score.explainedShare - a.score.explainedShare || (a.entry.id < b.entry.id ? -1 : a.entry.id > b.entry.id ? 1 : 0));
-  const aboveThreshold = found.length;
+  found.sort((a, b) => entryRankCompare(a.entry.id, a.score, b.entry.id, b.score));
   // Groups and shadowing are worked out among the reported candidates only.
   if (found.length > prep.maxCandidates) found = found.slice(0, prep.maxCandidates);
   const peakSets = found.map((f) => [...new Set(f.matches.flatMap((m) => m.peaks))].sort((x, y) => x - y));
@@ -51,6 +50,11 @@ export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, ent
     unexplainedPeaks: prep.set.used.map((p) => p.index).filter((i) => !explained.has(i)),
     caution: CAUTION_TEXT,
   };
+}
+
+/** Rank order: score, then explained share (both descending), then entry id. */
+export function entryRankCompare(idA: string, a: EntryScore, idB: string, b: EntryScore): number {
+  return b.score - a.score || b.explainedShare - a.explainedShare || (idA < idB ? -1 : idA > idB ? 1 : 0);
 }
 
 /** True when the shift lies in one of the set-aside regions (solvent, water, reference). */
