@@ -181,8 +181,9 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
           reject('below-share', `explains ${(share * 100).toPrecision(2)} % of the mixture intensity, below the ${(minShare * 100).toPrecision(2)} % threshold`);
         } else if (snr !== null && snr < DETECTION_SNR) {
           reject('below-detection', `its tallest fitted line has S/N ${snr.toFixed(1)}, below the detection limit ${DETECTION_SNR}`);
-        } else if (snr === null && smallestPeak !== null && c[a] * tallest(current[i]) < smallestPeak) {
-          reject('below-detection', 'its tallest fitted line is lower than the smallest peak of the list, so it could not have been seen');
+        } else if (snr === null && smallestPeak !== null && c[a] * tallest(current[i]) < 0.5 * smallestPeak) {
+          // Half the smallest listed peak leaves room for the fit's own error on a peak at the floor.
+          reject('below-detection', 'its tallest fitted line is below half the smallest peak of the list, so it could not have been picked');
         }
       });
       if (drop.length === 0) break;

@@ -55,6 +55,24 @@ describe('fitMixture', () => {
     expect(r.residual).toEqual(r.mixtureCurve);
     expect(FitResultSchema.safeParse(r).success).toBe(true);
   }, T);
+  it('fits a 13C peak list: one line per carbon signal, widths in Hz at the 13C frequency', () => {
+    // 13C shifts of ethanol (18.4, 58.3) and ethyl acetate (14.2, 21.0, 60.5, 171.1) are from memory;
+    // they only need to be distinct for this check.
+    const c13 = (id: string, shifts: number[]) => ({ ...get(id), signals: shifts.map((shift) => ({ nucleus: '13C' as const, shift, nuclei: 1 })) });
+    const etoh = c13('ethanol', [18.4, 58.3]);
+    const etoac = c13('ethyl-acetate', [14.2, 21.0, 60.5, 171.1]);
+    const w13 = 1.5 / (600.13 * 0.2514502); // 1.5 Hz at the 13C frequency (Harris et al. 2001 Ξ)
+    const peaks = [
+      ...[18.4, 58.3].map((x) => ({ shift: x + 0.2, intensity: (2 * 3) / (Math.PI * w13), widthHz: 1.5 })),
+      ...[14.2, 21.0, 60.5, 171.1].map((x) => ({ shift: x - 0.1, intensity: (2 * 1.2) / (Math.PI * w13), widthHz: 1.5 })),
+    ];
+    const mix: Mixture = { kind: 'peaks', name: 'c13', nucleus: '13C', solvent: 'CDCl3', mhz: 600.13, reference: 'TMS', intensityKind: 'height', peaks };
+    const r = fitMixture(mix, [etoh, etoac, get('acetone')]);
+    expect(r.components.find((c) => c.entryId === 'ethanol')!.amountPerNucleus).toBeCloseTo(3, 3);
+    expect(r.components.find((c) => c.entryId === 'ethanol')!.shiftOffsetPpm).toBeCloseTo(0.2, 4);
+    expect(r.components.find((c) => c.entryId === 'ethyl-acetate')!.amountPerNucleus).toBeCloseTo(1.2, 3);
+    expect(r.rejected.find((x) => x.entryId === 'acetone')?.reason).toBe('no-lines');
+  }, T);
   it('reports a candidate without lines in the nucleus as rejected', () => {
     const r = fitMixture({ ...synthPeaks(parts), nucleus: '13C' }, [get('acetone')]);
     expect(r.rejected).toEqual([{ entryId: 'acetone', name: 'acetone', reason: 'no-lines', message: 'no 13C signals to simulate', share: 0 }]);
