@@ -54,6 +54,7 @@ export const SignalEvidenceSchema = z.object({
   exchangeable: z.boolean(),
   hidden: z.boolean().describe('inside an excluded region: optional, like an exchangeable signal'),
   peakIndices: z.array(z.number().int().nonnegative()).describe('indices into ScreenResult.peaksUsed'),
+  linePpm: z.array(z.number().finite()).describe('for each of peakIndices, the first-order line position (ppm, at the mixture MHz) it was matched to'),
   linesMatched: z.number().int().nonnegative(),
   linesExpected: z.number().int().positive(),
   deltaPpm: z.number().finite().describe('mean signed (observed − expected) over matched lines, ppm'),

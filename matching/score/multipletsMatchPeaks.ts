@@ -12,6 +12,8 @@ export interface MultipletLines {
 export interface MultipletPeakMatch {
   /** Matched peak indices (into the ascending shift array), ascending. */
   peaks: number[];
+  /** For each matched peak (same order), the position of the line it was matched to, ppm. */
+  linePpm: number[];
   linesMatched: number;
   linesExpected: number;
   /** Observed − expected shift of the multiplet, ppm (0 when nothing matched). */
@@ -138,29 +140,27 @@ export function multipletsMatchPeaks(
   const out: MultipletPeakMatch[] = new Array(multiplets.length);
   for (let m = 0; m < multiplets.length; m++) {
     const mult = multiplets[m];
-    const peaks: number[] = [];
+    const pairs: Array<[number, number]> = [];
     let sumI = 0;
     let sumW = 0;
     let sumD = 0;
-    let single = -1;
-    let singleLine = -1;
     for (let k = 0; k < mult.ppm.length; k++) {
       const p = lineTo[lineBase[m] + k];
       if (p < 0) continue;
-      peaks.push(p);
+      pairs.push([p, k]);
       sumI += intensities[p];
       sumW += mult.weight[k];
       sumD += shifts[p] - mult.ppm[k];
-      single = p;
-      singleLine = k;
     }
-    const r: MultipletPeakMatch = { peaks, linesMatched: peaks.length, linesExpected: mult.ppm.length, deltaPpm: 0, intensity: 0 };
+    if (pairs.length > 1) pairs.sort((a, b) => a[0] - b[0]);
+    const peaks = pairs.map((q) => q[0]);
+    const r: MultipletPeakMatch = { peaks, linePpm: pairs.map((q) => mult.ppm[q[1]]), linesMatched: peaks.length, linesExpected: mult.ppm.length, deltaPpm: 0, intensity: 0 };
     if (peaks.length === 1) {
+      const single = peaks[0];
       const toCentre = shifts[single] - mult.centre;
-      r.deltaPpm = Math.abs(toCentre) <= tol ? toCentre : shifts[single] - mult.ppm[singleLine];
+      r.deltaPpm = Math.abs(toCentre) <= tol ? toCentre : shifts[single] - mult.ppm[pairs[0][1]];
       r.intensity = intensities[single];
     } else if (peaks.length > 1) {
-      peaks.sort((a, b) => a - b);
       r.deltaPpm = sumD / peaks.length;
       r.intensity = sumI / sumW;
     }

@@ -91,6 +91,7 @@ function candidateBuild(f: EntryFound, rankIndex: number, regions: ReadonlyArray
     evidence.push({
       ...common,
       peakIndices: m.peaks,
+      linePpm: m.linePpm,
       linesMatched: m.linesMatched,
       linesExpected: m.linesExpected,
       deltaPpm: m.deltaPpm,

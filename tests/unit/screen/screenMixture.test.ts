@@ -106,6 +106,9 @@ describe('screenMixture: mixtures built from the published contaminant table', (
     expect(c.name).toBe('ethyl acetate');
     const q = c.evidence.find((e) => e.shift === 4.12)!;
     expect([q.linesMatched, q.linesExpected, q.peakIndices.length]).toEqual([4, 4, 4]);
+    // quartet lines at 4.12 ± 3.5 and ± 10.5 Hz at 600 MHz (first order, formulas.md (c)), each matched to its own peak
+    expect(q.linePpm).toEqual([-10.5, -3.5, 3.5, 10.5].map((o) => expect.closeTo(4.12 + o / 600, 9)));
+    q.peakIndices.forEach((p, k) => expect(r.peaksUsed[p].shift).toBeCloseTo(q.linePpm[k], 9));
     expect(q.deltaPpm).toBeCloseTo(0, 10);
     for (const e of c.evidence) {
       expect(e.intensity / e.nuclei).toBeCloseTo(100, 8);
