@@ -75,6 +75,24 @@ export const InternalStandardSchema = z.object({
 });
 export type InternalStandard = z.infer<typeof InternalStandardSchema>;
 
+/** Weighed masses for a qNMR purity assay of one analyte against the internal standard. */
+export const PurityInputSchema = z.object({
+  entryId: z.string().min(1).describe('the analyte whose purity is assayed'),
+  analyteMassMg: z.number().finite().positive(),
+  standardMassMg: z.number().finite().positive(),
+  standardPurity: z.number().finite().positive().max(1).describe('mass fraction of the standard, 0–1'),
+});
+export type PurityInput = z.infer<typeof PurityInputSchema>;
+
+export const PurityResultSchema = z.object({
+  entryId: z.string(),
+  massFraction: finite.nonnegative().describe('w_A by BIPM ISRD-03 eq. 1'),
+  uncertainty: finite.nonnegative().nullable().describe('from the fit only (weighing and molar-mass uncertainties not included)'),
+  molarMassAnalyte: finite.positive(),
+  molarMassStandard: finite.positive(),
+});
+export type PurityResult = z.infer<typeof PurityResultSchema>;
+
 export const AmountResultSchema = z.object({
   entryId: z.string(),
   name: z.string(),
@@ -100,6 +118,7 @@ export const AnalysisOptionsSchema = z.object({
   screen: ScreenOptionsSchema.optional(),
   fit: FitOptionsSchema.optional(),
   standard: InternalStandardSchema.optional(),
+  purity: PurityInputSchema.optional(),
   decoySets: z.number().int().min(1).max(200).optional().describe('decoy copies of the library (default 20)'),
   seed: z.number().int().optional().describe('seed of the decoy generator (default 1)'),
   anySolvent: z.boolean().optional().describe('use entries of every solvent (default false: only the mixture’s solvent, and "other")'),
@@ -112,6 +131,7 @@ export const AnalysisReportSchema = z.object({
   screenedCandidates: z.array(z.string()).describe('entry ids kept by screening and passed to the fit'),
   fit: FitResultSchema,
   amounts: z.array(AmountResultSchema),
+  purity: PurityResultSchema.nullable(),
   qValues: z.array(QValueSchema),
   decoySets: z.number().int().positive(),
   warnings: z.array(z.string()),

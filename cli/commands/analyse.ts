@@ -1,13 +1,14 @@
 // `tessera analyse`: screening, overlay fit, amounts and q-values for one mixture file.
 import { parseArgs } from 'node:util';
 import { analyseMixture } from '../../matching/analyse/analyseMixture';
-import type { AnalysisOptions, AnalysisReport, InternalStandard } from '../../shared/analysis';
+import type { AnalysisOptions, AnalysisReport, InternalStandard, PurityInput } from '../../shared/analysis';
 import { CAUTION_TEXT } from '../../shared/caution';
 import type { CliCommand } from './index';
 import { cliErrorReport, cliNumber, libraryFileRead, mixtureFileRead, SCREEN_OPTIONS, screenSettings, UsageError } from './screen';
 
 const USAGE =
-  'usage: tessera analyse --library L.json [--library more.json] --mixture M.csv|M.jdx [--standard ID:CONC_mM[:NUCLEI]] [--linewidth HZ] [--decoys N] [--seed N]\n' +
+  'usage: tessera analyse --library L.json [--library more.json] --mixture M.csv|M.jdx [--standard ID:CONC_mM[:NUCLEI]]\n' +
+  '                       [--purity ANALYTE_ID:MASS_mg:STD_MASS_mg:STD_PURITY] [--linewidth HZ] [--decoys N] [--seed N]\n' +
   '                       [--solvent CDCl3] [--nucleus 1H] [--mhz 600] [--tolerance 0.03] [--min-score 0.5] [--keep-solvent] [--json]';
 
 /** "ID:CONC_mM[:NUCLEI]" → an internal standard; the id may itself hold colons. */
@@ -26,6 +27,17 @@ export function standardParse(raw: string): InternalStandard {
   const entryId = parts.slice(0, -1).join(':');
   if (entryId === '') throw bad();
   return { entryId, concentrationMM: last };
+}
+
+/** "ID:MASS_mg:STD_MASS_mg:STD_PURITY" → a purity assay; the id may itself hold colons. */
+export function purityParse(raw: string): PurityInput {
+  const parts = raw.split(':');
+  const nums = parts.slice(-3).map((s) => (s.trim() === '' ? NaN : Number(s)));
+  const entryId = parts.slice(0, -3).join(':');
+  if (parts.length < 4 || entryId === '' || !nums.every((v) => Number.isFinite(v) && v > 0) || nums[2] > 1) {
+    throw new UsageError(`--purity must be ANALYTE_ID:MASS_mg:STANDARD_MASS_mg:STANDARD_PURITY (purity as a fraction ≤ 1, e.g. benzoic-acid:12.05:10.12:0.9994), got "${raw}"`);
+  }
+  return { entryId, analyteMassMg: nums[0], standardMassMg: nums[1], standardPurity: nums[2] };
 }
 
 function fixed(v: number | null, digits: number): string {
@@ -57,6 +69,10 @@ export function analysisReportTable(r: AnalysisReport): string {
     const fmt = (row: string[]) => row.map((v, i) => (i === row.length - 1 ? v : v.padEnd(widths[i]))).join('  ').trimEnd();
     out.push(fmt(head), fmt(widths.map((w) => '-'.repeat(w))), ...rows.map(fmt));
   }
+  if (r.purity) {
+    const p = r.purity;
+    out.push(`Purity of ${p.entryId}: mass fraction ${p.massFraction.toFixed(4)}${p.uncertainty !== null ? ` ± ${p.uncertainty.toFixed(4)} (fit only)` : ''}, M = ${p.molarMassAnalyte.toFixed(3)} g/mol against the standard's ${p.molarMassStandard.toFixed(3)} g/mol`);
+  }
   if (f.rejected.length > 0) {
     const shown = f.rejected.slice(0, 8).map((x) => `${x.entryId} (${x.message})`);
     out.push(`Rejected by the fit (${f.rejected.length}): ${shown.join('; ')}${f.rejected.length > 8 ? '; … (all in --json)' : ''}`);
@@ -81,6 +97,7 @@ export async function run(argv: string[]): Promise<number> {
         library: { type: 'string', multiple: true },
         mixture: { type: 'string' },
         standard: { type: 'string' },
+        purity: { type: 'string' },
         linewidth: { type: 'string' },
         decoys: { type: 'string' },
         seed: { type: 'string' },
@@ -97,6 +114,10 @@ export async function run(argv: string[]): Promise<number> {
     const { meta, options: screen } = screenSettings(values);
     const options: AnalysisOptions = { screen };
     if (values.standard !== undefined) options.standard = standardParse(values.standard);
+    if (values.purity !== undefined) {
+      if (!options.standard) throw new UsageError('--purity needs --standard');
+      options.purity = purityParse(values.purity);
+    }
     const lw = cliNumber('linewidth', values.linewidth, (v) => v > 0 && v <= 100, 'a linewidth in Hz between 0 and 100');
     if (lw !== undefined) options.fit = { linewidthHz: lw };
     const sets = cliNumber('decoys', values.decoys, (v) => Number.isInteger(v) && v >= 1 && v <= 200, 'a whole number of decoy libraries between 1 and 200');

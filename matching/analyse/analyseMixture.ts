@@ -7,6 +7,7 @@ import { libraryToDecoys } from '../confidence/libraryToDecoys';
 import { scoresToQValues } from '../confidence/scoresToQValues';
 import { fitMixture } from '../fit/fitMixture';
 import { fitToAmounts } from '../quant/fitToAmounts';
+import { fitToPurity } from '../quant/fitToPurity';
 import { screenMixture } from '../screen/screenMixture';
 
 /** Shift range of the mixture, ppm: the spectrum axis, or the peaks' span widened by the window. */
@@ -81,6 +82,8 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
   for (const g of screen.ambiguityGroups) warnings.push(`screening could not tell apart: ${g.members.join(', ')}`);
   const references = library.filter((e) => e.category === 'reference' && e.id !== standard?.entryId).map((e) => e.id);
   const amounts = fitToAmounts(fit, standard, { excludeFromFractions: references });
+  if (opts.purity && !standard) throw new RangeError('a purity assay needs an internal standard (options.standard)');
+  const purity = opts.purity && standard ? fitToPurity(fit, standard, opts.purity, library) : null;
 
   const sets = opts.decoySets ?? 20;
   const range = mixtureRange(mixture, screen.tolerancePpm);
@@ -101,6 +104,7 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
     screenedCandidates: targets.ids,
     fit,
     amounts,
+    purity,
     qValues,
     decoySets: sets,
     warnings,

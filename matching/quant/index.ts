@@ -2,3 +2,4 @@ export * from './qnmrConcentration';
 export * from './qnmrPurity';
 export * from './formulaMolarMass';
 export * from './fitToAmounts';
+export * from './fitToPurity';

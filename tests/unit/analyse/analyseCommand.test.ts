@@ -4,7 +4,7 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import { run, standardParse } from '../../../cli/commands/analyse';
+import { purityParse, run, standardParse } from '../../../cli/commands/analyse';
 import { CAUTION_TEXT } from '../../../shared/caution';
 import { contaminantLibrary, synthPeaks } from '../fit/contaminantLibrary';
 
@@ -39,6 +39,17 @@ describe('tessera analyse', () => {
     expect(standardParse('reference:maleic-acid:D2O:2')).toEqual({ entryId: 'reference:maleic-acid:D2O', concentrationMM: 2 });
     expect(() => standardParse('dss')).toThrow('--standard must be ID:CONC_mM or ID:CONC_mM:NUCLEI (e.g. dss:0.5:9), got "dss"');
     expect(() => standardParse('dss:-1')).toThrow(/^--standard must be/);
+  });
+  it('parses --purity ID:MASS:STD_MASS:STD_PURITY', () => {
+    expect(purityParse('reference:bz:D2O:12.05:10.12:0.9994')).toEqual({ entryId: 'reference:bz:D2O', analyteMassMg: 12.05, standardMassMg: 10.12, standardPurity: 0.9994 });
+    expect(() => purityParse('bz:12:10:99.94')).toThrow(/^--purity must be ANALYTE_ID:MASS_mg:STANDARD_MASS_mg:STANDARD_PURITY/);
+  });
+  it('prints the purity line when masses are given', async () => {
+    const { out } = capture();
+    const code = await run(['--library', libraryFile, '--mixture', mixtureFile, '--mhz', '600.13', '--solvent', 'CDCl3', '--standard', '1-4-dioxane:2', '--purity', 'ethanol:20:10:0.999', '--decoys', '2']);
+    expect(code).toBe(0);
+    // w_A = (a_A/a_S)(M_A/M_S)(m_S/m_A)w_S = (2/0.5)(46.069/88.106)(10/20)(0.999) = 1.0447 (C 12.011, H 1.008, O 15.999)
+    expect(out.join('\n')).toMatch(/Purity of ethanol: mass fraction 1\.044[67]/);
   });
   it('exits 2 with a message when a required flag is missing', async () => {
     const { err } = capture();
