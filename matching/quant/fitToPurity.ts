@@ -7,7 +7,7 @@ function molarMass(entry: LibraryEntry): number {
   try {
     return formulaMolarMass(entry.formula);
   } catch (e) {
-    throw new RangeError(`entry "${entry.id}": ${(e as Error).message}`);
+    throw new RangeError(`entry "${entry.id}": ${(e as Error).message}`, { cause: e });
   }
 }
 
