@@ -13,7 +13,6 @@ async function main(): Promise<void> {
   for (const file of files) {
     const name = file.replace(/\.ts$/, '');
     if (only.length > 0 && !only.includes(name)) continue;
-    // eslint-disable-next-line @typescript-eslint/no-require-imports
     const mod = require(path.join(dir, file)) as { run?: () => Promise<void> };
     if (typeof mod.run !== 'function') throw new Error(`scripts/bench/${file} does not export run(): Promise<void>`);
     console.log(`\n=== bench: ${name} ===`);

@@ -3,5 +3,7 @@ export * from './libraryIndexCached';
 export * from './libraryIndexEntryMatch';
 export * from './candidatesRelate';
 export * from './screenPrepare';
+export * from './entryRankCompare';
+export * from './shiftInRegions';
 export * from './screenResultAssemble';
 export * from './screenMixture';

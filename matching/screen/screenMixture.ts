@@ -4,7 +4,9 @@ import type { ScreenOptions, ScreenResult } from '../../shared/screening';
 import { entryScore, type EntryScore, type SignalMatchSummary } from '../score/entryScore';
 import { libraryIndexCached } from './libraryIndexCached';
 import { libraryIndexEntryMatch, type SignalMatch } from './libraryIndexEntryMatch';
-import { entryRankCompare, inRegions, screenResultAssemble, type EntryFound } from './screenResultAssemble';
+import { entryRankCompare } from './entryRankCompare';
+import { screenResultAssemble, type EntryFound } from './screenResultAssemble';
+import { shiftInRegions } from './shiftInRegions';
 import { screenPrepare } from './screenPrepare';
 
 /**
@@ -37,7 +39,7 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
     const matches = libraryIndexEntryMatch(index, e, shifts, intensities, tol);
     const summaries: SignalMatchSummary[] = matches.map((m) => ({
       nuclei: index.sigNuclei[m.signal],
-      exchangeable: index.sigExchangeable[m.signal] === 1 || inRegions(index.sigShift[m.signal], set.regions),
+      exchangeable: index.sigExchangeable[m.signal] === 1 || shiftInRegions(index.sigShift[m.signal], set.regions),
       matched: m.linesMatched > 0,
       deltaPpm: m.deltaPpm,
       intensity: m.intensity,

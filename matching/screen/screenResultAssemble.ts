@@ -5,6 +5,8 @@ import type { ScreenCandidate, ScreenResult, SignalEvidence, UnmatchedSignal } f
 import type { EntryScore } from '../score/entryScore';
 import type { MultipletPeakMatch } from '../score/multipletsMatchPeaks';
 import { candidatesRelate } from './candidatesRelate';
+import { entryRankCompare } from './entryRankCompare';
+import { shiftInRegions } from './shiftInRegions';
 import type { ScreenPrepared } from './screenPrepare';
 
 export interface EntryFound {
@@ -52,17 +54,6 @@ export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, ent
   };
 }
 
-/** Rank order: score, then explained share (both descending), then entry id. */
-export function entryRankCompare(idA: string, a: EntryScore, idB: string, b: EntryScore): number {
-  return b.score - a.score || b.explainedShare - a.explainedShare || (idA < idB ? -1 : idA > idB ? 1 : 0);
-}
-
-/** True when the shift lies in one of the set-aside regions (solvent, water, reference). */
-export function inRegions(shift: number, regions: ReadonlyArray<{ from: number; to: number }>): boolean {
-  for (const r of regions) if (shift >= r.from && shift <= r.to) return true;
-  return false;
-}
-
 function candidateBuild(f: EntryFound, rankIndex: number, regions: ReadonlyArray<{ from: number; to: number }>): ScreenCandidate {
   const entry = f.entry;
   const ratios = f.matches.filter((m) => m.linesMatched > 0).map((m) => m.intensity / entry.signals[m.signalIndex].nuclei);
@@ -81,7 +72,7 @@ function candidateBuild(f: EntryFound, rankIndex: number, regions: ReadonlyArray
       ...(s.nucleus === '1H' ? { multiplicity: s.multiplicity } : {}),
       nuclei: s.nuclei,
       exchangeable: s.nucleus === '1H' && s.exchangeable === true,
-      hidden: inRegions(s.shift, regions),
+      hidden: shiftInRegions(s.shift, regions),
     };
     if (m.linesMatched === 0) {
       unmatched.push(common);

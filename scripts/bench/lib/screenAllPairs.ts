@@ -4,7 +4,7 @@
 // pruning. It is the baseline the benchmark measures against and the oracle the tests compare with.
 import { multipletToLines } from '../../../matching/multiplets/multipletToLines';
 import { entryScore, multipletsMatchPeaks } from '../../../matching/score';
-import { inRegions, screenPrepare, screenResultAssemble, type EntryFound } from '../../../matching/screen';
+import { screenPrepare, screenResultAssemble, shiftInRegions, type EntryFound } from '../../../matching/screen';
 import type { LibraryEntry } from '../../../shared/libraryEntry';
 import type { Mixture } from '../../../shared/mixture';
 import type { ScreenOptions, ScreenResult } from '../../../shared/screening';
@@ -40,7 +40,7 @@ export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], option
     const allOptional = signals.every(({ s }) => s.nucleus === '1H' && s.exchangeable === true);
     const summaries = signals.map(({ s }, k) => ({
       nuclei: s.nuclei,
-      exchangeable: (s.nucleus === '1H' && s.exchangeable === true && !allOptional) || inRegions(s.shift, set.regions),
+      exchangeable: (s.nucleus === '1H' && s.exchangeable === true && !allOptional) || shiftInRegions(s.shift, set.regions),
       matched: matches[k].linesMatched > 0,
       deltaPpm: matches[k].deltaPpm,
       intensity: matches[k].intensity,
