@@ -63,7 +63,11 @@ export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: Cand
         minWidth: 110,
         align: 'right',
         sortValue: (r) => r.amount?.concentrationMM ?? -1,
-        render: (r) => withUncertainty(r.amount?.concentrationMM, r.amount?.concentrationUncertaintyMM),
+        render: (r) => (
+          <Text accessibilityLabel={`Concentration of ${r.name}`} style={{ color: t.colours.text, fontFamily: t.fonts.regular, fontSize: 13 }}>
+            {withUncertainty(r.amount?.concentrationMM, r.amount?.concentrationUncertaintyMM)}
+          </Text>
+        ),
       });
     }
     cols.push(
@@ -125,7 +129,10 @@ export function CandidateTable({ rows, hasStandard, selectedId, onSelect }: Cand
               <Text accessibilityLabel={`Amount of ${r.name}`} style={{ fontFamily: t.fonts.semibold }}>
                 {amountText(r)}
               </Text>
-              {hasStandard && r.amount?.concentrationMM != null ? ` · ${withUncertainty(r.amount.concentrationMM, r.amount.concentrationUncertaintyMM)} mmol/L` : ''}
+              {hasStandard && r.amount?.concentrationMM != null ? ' · ' : ''}
+              {hasStandard && r.amount?.concentrationMM != null ? (
+                <Text accessibilityLabel={`Concentration of ${r.name}`}>{`${withUncertainty(r.amount.concentrationMM, r.amount.concentrationUncertaintyMM)} mmol/L`}</Text>
+              ) : null}
             </Text>
             <Text numberOfLines={2} style={[styles.fact, { color: r.confirmed ? t.colours.positive : t.colours.textMuted, fontFamily: t.fonts.regular }]}>
               {statusText(r)}

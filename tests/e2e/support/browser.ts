@@ -35,9 +35,32 @@ export async function openBrowser(viewport: ViewportName): Promise<{ context: Br
   };
 }
 
+/**
+ * Saves a PNG of the page. React Native Web scrolls inside its own views, so "full page" alone
+ * shows one screenful: the viewport is stretched to the tallest scrolled content for the shot
+ * (at most 5000 px) and put back afterwards.
+ */
 export async function screenshot(page: Page, name: string): Promise<void> {
   fs.mkdirSync(ARTIFACTS, { recursive: true });
-  await page.screenshot({ path: path.join(ARTIFACTS, `${name}.png`), fullPage: true });
+  const size = page.viewportSize();
+  const tallest = await page.evaluate(() => {
+    let extra = 0;
+    for (const el of Array.from(document.querySelectorAll<HTMLElement>('*'))) {
+      const style = getComputedStyle(el);
+      if (!/(auto|scroll)/.test(style.overflowY)) continue;
+      extra = Math.max(extra, el.scrollHeight - el.clientHeight);
+    }
+    return extra;
+  });
+  if (size && tallest > 0) {
+    await page.setViewportSize({ width: size.width, height: Math.min(5000, size.height + tallest) });
+    await page.waitForTimeout(250);
+  }
+  try {
+    await page.screenshot({ path: path.join(ARTIFACTS, `${name}.png`), fullPage: true });
+  } finally {
+    if (size && tallest > 0) await page.setViewportSize(size);
+  }
 }
 
 /** True when the page is wider than its viewport (something overflows horizontally). */
