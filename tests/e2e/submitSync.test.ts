@@ -124,4 +124,33 @@ describe('submit offline, sync, approve, sync back', () => {
       await close();
     }
   });
+
+  it('when a new entry takes an id the library already has, then sync marks it refused and says why', async () => {
+    const { page: a, close } = await openBrowser('phone');
+    try {
+      await signIn(a, server.url, 'analyst@demo.tessera.test');
+      await a.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await a.getByRole('link', { name: 'Submit' }).click();
+      await a.getByLabel('Compound name').fill('Demo: e2e clashing entry');
+      await a.getByLabel('Entry id (optional)').fill('reference:dss:D2O');
+      await a.getByLabel('Formula (Hill order)').fill('C2H6O');
+      await a.getByLabel('Source (citation or your lab notebook)').fill('Tessera browser test (invented demo entry)');
+      await a.getByLabel('Signal 1 shift (ppm)').fill('1.17');
+      await a.getByLabel('Signal 1 multiplicity').fill('t');
+      await a.getByLabel('Signal 1 J (Hz)').fill('7.0');
+      await a.getByLabel('Signal 1 nuclei').fill('3');
+      await a.getByRole('button', { name: 'Submit the entry' }).click();
+      await a.getByLabel('Submission saved').waitFor({ timeout: 10_000 });
+      await a.getByRole('link', { name: 'More' }).click();
+      await a.getByRole('link', { name: 'Open Sync' }).click();
+      const status = a.getByLabel('Status of Demo: e2e clashing entry');
+      await expect.poll(() => status.innerText(), { timeout: 20_000 }).toBe('refused by the server');
+      const item = await a.getByLabel('Outbox item Demo: e2e clashing entry').innerText();
+      expect(item).toContain('Conflict');
+      expect(item).toContain('reference:dss:D2O');
+      expect(await a.getByLabel('Pending outbox count').innerText()).toBe('0 waiting in the outbox');
+    } finally {
+      await close();
+    }
+  });
 });
