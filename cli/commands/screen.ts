@@ -2,7 +2,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
-import { InputError, mixtureParseFile, type MixtureMeta } from '../../matching/io';
+import { InputError, mixtureParseFile, textCommentMeta, type MixtureMeta } from '../../matching/io';
 import { screenMixture } from '../../matching/screen';
 import { CAUTION_TEXT } from '../../shared/caution';
 import { LibraryFileSchema, type LibraryEntry } from '../../shared/libraryEntry';
@@ -97,7 +97,8 @@ export function mixtureFileRead(file: string, meta: MixtureMeta): ReturnType<typ
     throw new UsageError(`cannot read mixture ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
   }
   const isJcamp = text.trimStart().startsWith('##');
-  const withMhz = meta.mhz === undefined && !isJcamp ? { ...meta, mhz: CLI_DEFAULT_MHZ } : meta;
+  const stated = meta.mhz !== undefined || isJcamp || textCommentMeta(text).mhz !== undefined;
+  const withMhz = stated ? meta : { ...meta, mhz: CLI_DEFAULT_MHZ };
   if (withMhz !== meta) console.error(`note: ${path.basename(file)} does not say its spectrometer frequency; assuming ${CLI_DEFAULT_MHZ} MHz (use --mhz)`);
   return mixtureParseFile(path.basename(file), text, withMhz);
 }

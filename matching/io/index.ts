@@ -1,6 +1,7 @@
 export * from './InputError';
 export * from './textTableNumber';
 export * from './textTableRead';
+export * from './textCommentMeta';
 export * from './mixtureMetaParse';
 export * from './peakListParseText';
 export * from './spectrumParseCsv';

@@ -3,6 +3,7 @@ import { PeakListMixtureSchema, type PeakListMixture } from '../../shared/mixtur
 import { USUAL_SHIFT_RANGE_PPM } from '../../shared/nucleus';
 import { InputError } from './InputError';
 import { mixtureMetaParse, type MixtureMeta } from './mixtureMetaParse';
+import { textCommentMeta } from './textCommentMeta';
 import { textTableNumber } from './textTableNumber';
 import { textTableRead } from './textTableRead';
 
@@ -23,11 +24,13 @@ function headerName(raw: string): string {
  * Reads a peak list from CSV/TSV text or pasted text. With a header the columns may come in any
  * order (shift/δ/ppm, intensity/height/integral/area, width/fwhm in Hz; other columns are
  * ignored); without one they are shift, intensity[, width Hz]. Every bad line is reported with its
- * number; on any problem an InputError is thrown and nothing is returned.
+ * number; on any problem an InputError is thrown and nothing is returned. Solvent, MHz and reference
+ * stated in leading "#" comments are used unless meta gives them (textCommentMeta).
  */
 export function peakListParseText(text: string, meta: MixtureMeta = {}): PeakListMixture {
   if (typeof text !== 'string') throw new TypeError('peak list text must be a string');
-  const { meta: m, issues } = mixtureMetaParse(meta);
+  const { meta: given, issues } = mixtureMetaParse(meta);
+  const m: MixtureMeta = { ...textCommentMeta(text), ...(Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)) as MixtureMeta) };
   if (issues.length > 0) throw new InputError('peak list metadata', issues);
   if (m.mhz === undefined) throw new InputError('peak list metadata', [{ field: 'mhz', message: 'spectrometer frequency (MHz) is required' }]);
   const nucleus = m.nucleus ?? '1H';

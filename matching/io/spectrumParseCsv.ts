@@ -2,6 +2,7 @@ import type { InputIssue } from '../../shared/inputIssue';
 import { SpectrumMixtureSchema, type SpectrumMixture } from '../../shared/mixture';
 import { InputError } from './InputError';
 import { mixtureMetaParse, type MixtureMeta } from './mixtureMetaParse';
+import { textCommentMeta } from './textCommentMeta';
 import { textTableNumber } from './textTableNumber';
 import { textTableRead } from './textTableRead';
 
@@ -15,7 +16,8 @@ const Y_NAMES = /^(intensity|y|i|int|amplitude|signal|real)$/;
  */
 export function spectrumParseCsv(text: string, meta: MixtureMeta = {}): SpectrumMixture {
   if (typeof text !== 'string') throw new TypeError('spectrum text must be a string');
-  const { meta: m, issues } = mixtureMetaParse(meta);
+  const { meta: given, issues } = mixtureMetaParse(meta);
+  const m: MixtureMeta = { ...textCommentMeta(text), ...(Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)) as MixtureMeta) };
   if (issues.length > 0) throw new InputError('spectrum metadata', issues);
   if (m.mhz === undefined) throw new InputError('spectrum metadata', [{ field: 'mhz', message: 'spectrometer frequency (MHz) is required' }]);
   const table = textTableRead(text);

@@ -19,7 +19,8 @@ export interface EntryFound {
 /**
  * Turns scored entries into the ScreenResult: ranking (score, then explained share, then id),
  * the maxCandidates cut, evidence and unmatched multiplets per candidate, ambiguity groups and
- * shadowing among the reported candidates, unexplained peaks and the caution.
+ * shadowing among the reported candidates (worked out in score order), unexplained peaks and the
+ * caution. The final list puts candidates that are not shadowed first, each part in score order.
  */
 export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, entriesScreened: number, scored: EntryFound[], aboveThreshold = scored.length): ScreenResult {
   let found = scored;
@@ -28,10 +29,16 @@ export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, ent
   if (found.length > prep.maxCandidates) found = found.slice(0, prep.maxCandidates);
   const peakSets = found.map((f) => [...new Set(f.matches.flatMap((m) => m.peaks))].sort((x, y) => x - y));
   const relations = candidatesRelate(found.map((f, i) => ({ entryId: f.entry.id, peaks: peakSets[i], explainedShare: f.score.explainedShare })));
-  const candidates: ScreenCandidate[] = found.map((f, i) => candidateBuild(f, i, prep.set.regions));
-  candidates.forEach((c, i) => {
+  const built: ScreenCandidate[] = found.map((f, i) => candidateBuild(f, i, prep.set.regions));
+  built.forEach((c, i) => {
     c.ambiguityGroup = relations.groupOf[i];
     c.shadowedBy = relations.shadowedBy[i];
+  });
+  // A candidate whose every peak other candidates already explain is weak evidence however well it
+  // scores (one singlet on another compound's multiplet): the unshadowed ones are listed first.
+  const candidates = [...built.filter((c) => c.shadowedBy.length === 0), ...built.filter((c) => c.shadowedBy.length > 0)];
+  candidates.forEach((c, i) => {
+    c.rank = i + 1;
   });
   const groups = relations.groups;
   const explained = new Set<number>();

@@ -91,3 +91,16 @@ describe('peakListParseText', () => {
     expect(peakListParseText('77.16,1\n206.3,2', { ...meta, nucleus: '13C' }).peaks).toHaveLength(2);
   });
 });
+
+describe('peakListParseText: metadata in comments', () => {
+  it('reads solvent, MHz and reference from leading # lines; explicit metadata wins', () => {
+    const text = '# demo list\n# solvent DMSO-d6, 600.13 MHz, reference TMS\nshift,intensity\n2.09,6\n';
+    expect(peakListParseText(text)).toMatchObject({ solvent: 'DMSO-d6', mhz: 600.13, reference: 'TMS' });
+    expect(peakListParseText(text, { mhz: 400, solvent: 'CDCl3' })).toMatchObject({ solvent: 'CDCl3', mhz: 400 });
+  });
+
+  it('ignores comments after the data starts and unknown solvent names', () => {
+    expect(() => peakListParseText('2.09,6\n# 600 MHz\n')).toThrow('peak list metadata: mhz: spectrometer frequency (MHz) is required');
+    expect(peakListParseText('# solvent CCl4 at 300 MHz\n2.09,6\n').solvent).toBe('other');
+  });
+});
