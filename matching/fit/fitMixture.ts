@@ -1,4 +1,4 @@
-import { FitOptionsSchema, type FitComponent, type FitOptions, type FitResult, type RejectedCandidate, type UnexplainedPeak } from '../../shared/analysis';
+import { FitOptionsSchema, type FitComponent, type FitOptions, type FitResult, type RejectedCandidate } from '../../shared/analysis';
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Mixture } from '../../shared/mixture';
 import { DEFAULT_TOLERANCE_PPM } from '../../shared/nucleus';
@@ -14,6 +14,8 @@ import { shiftLines, toPlainArray, type FitDesign, type FitLine } from './fitTyp
 import { intensityNoiseLevel } from './intensityNoiseLevel';
 import { nnlsSolve } from './nnlsSolve';
 import { spdSolve } from './spdSolve';
+import { fitUnexplainedPeaks } from './fitUnexplainedPeaks';
+import { linewidthRefine } from './linewidthRefine';
 
 /** Quantitation limit S/N = 10 (ICH Q2(R1), signal-to-noise approach; common practice). */
 export const QUANTITATION_SNR = 10;
@@ -194,8 +196,8 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
 
   search(3);
   // A spectrum without a stated linewidth: refine the common width by golden-section search of
-  // the residual, with only the candidates that survive a
-  // first solve (spurious ones fitting noise would pull the width down), then re-search offsets.
+  // the residual, with only the candidates that survive a first solve (spurious ones fitting
+  // noise would pull the width down), then re-search offsets.
   if (mixture.kind === 'spectrum' && parsed.data.linewidthHz === undefined && kept.length > 0) {
     const r = rough();
     const survivors = solveAndReject(r, false);
@@ -212,19 +214,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
         }
         return v;
       };
-      const phi = (Math.sqrt(5) - 1) / 2;
-      // The bracket spans the estimate and the usual 0.3–3 Hz of solution lines (common practice).
-      let lo = Math.log(Math.min(linewidthHz / 3, 0.3));
-      let hi = Math.log(Math.max(linewidthHz * 3, 3));
-      let p = hi - phi * (hi - lo);
-      let q = lo + phi * (hi - lo);
-      let fp = sseAt(Math.exp(p));
-      let fq = sseAt(Math.exp(q));
-      for (let it = 0; it < 18; it++) {
-        if (fp < fq) { hi = q; q = p; fq = fp; p = hi - phi * (hi - lo); fp = sseAt(Math.exp(p)); }
-        else { lo = p; p = q; fp = fq; q = lo + phi * (hi - lo); fq = sseAt(Math.exp(q)); }
-      }
-      linewidthHz = Math.exp((lo + hi) / 2);
+      linewidthHz = linewidthRefine(sseAt, linewidthHz);
       base = linesAt(linewidthHz);
       current = base.map((l, i) => shiftLines(l, offsets[i]));
       search(2);
@@ -295,37 +285,11 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     };
   });
 
-  const unexplainedPeaks: UnexplainedPeak[] = [];
-  if (mixture.kind === 'peaks') {
-    const fittedAt = (x: number) => {
-      let s = 0;
-      active.forEach((i, a) => {
-        s += c[a] * design.dotLL(current[i], [{ x, a: 1, w: 0 }]) ;
-      });
-      return s;
-    };
-    for (const p of mixture.peaks) {
-      const here = design.dotLY([{ x: p.shift, a: 1, w: 0 }]);
-      const model = fittedAt(p.shift);
-      if (here > 0 && model < unexplainedFraction * here) unexplainedPeaks.push({ shift: p.shift, intensity: p.intensity, fitted: (model / here) * p.intensity });
-    }
-  } else {
-    const y = design.mixtureCurve;
-    let ymax = 0;
-    for (const v of y) ymax = Math.max(ymax, v);
-    const floor = Math.max(3 * (noise ?? 0), 1e-3 * ymax);
-    for (let p = 1; p < n - 1; p++) {
-      if (y[p] > floor && y[p] >= y[p - 1] && y[p] > y[p + 1] && fitted[p] < unexplainedFraction * y[p]) {
-        unexplainedPeaks.push({ shift: design.axis[p], intensity: y[p], fitted: fitted[p] });
-      }
-    }
-    // Noise on a peak top makes several maxima: keep the tallest within two linewidths.
-    unexplainedPeaks.sort((p, q) => q.intensity - p.intensity);
-    const apart = (2 * linewidthHz) / freq;
-    const distinct: UnexplainedPeak[] = [];
-    for (const p of unexplainedPeaks) if (distinct.length < 200 && distinct.every((k) => Math.abs(k.shift - p.shift) > apart)) distinct.push(p);
-    unexplainedPeaks.splice(0, unexplainedPeaks.length, ...distinct);
-  }
+  const unexplainedPeaks = fitUnexplainedPeaks(mixture, design, active.map((i) => current[i]), c, fitted, {
+    noise,
+    fraction: unexplainedFraction,
+    apartPpm: (2 * linewidthHz) / freq,
+  });
 
   const out = (a: Float64Array) => (!withCurves ? [] : prepared ? maybeReverse(a, prepared.reversed) : toPlainArray(a));
   return {
