@@ -30,12 +30,16 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
   // Light records while scoring; only the reported best get their evidence built.
   const scored: Array<{ e: number; matches: SignalMatch[]; score: EntryScore }> = [];
   const { hitRequired, hitExchangeable } = index.scratch;
+  // Upper bound of E per touched entry (hidden signals counted as found); score ≤ E². The scratch
+  // is cleared before any matching so an error below cannot leave it dirty for the next run.
+  const bounds = touched.map((e) => (hitRequired[e] + hitExchangeable[e]) / (index.entryRequired[e] + hitExchangeable[e]));
   for (const e of touched) {
-    // Upper bound of E (hidden signals counted as found); score ≤ E².
-    const bound = (hitRequired[e] + hitExchangeable[e]) / (index.entryRequired[e] + hitExchangeable[e]);
     hitRequired[e] = 0;
     hitExchangeable[e] = 0;
-    if (bound * bound < minScore - 1e-12) continue;
+  }
+  for (let t = 0; t < touched.length; t++) {
+    const e = touched[t];
+    if (bounds[t] * bounds[t] < minScore - 1e-12) continue;
     const matches = libraryIndexEntryMatch(index, e, shifts, intensities, tol);
     const summaries: SignalMatchSummary[] = matches.map((m) => ({
       nuclei: index.sigNuclei[m.signal],
