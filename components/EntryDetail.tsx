@@ -7,6 +7,7 @@ import { DataTable, type Column } from './ui/DataTable';
 import { ChoiceRow } from './ui/ChoiceRow';
 import { SpectrumPlot } from './plot/SpectrumPlot';
 import { entrySpectrum } from './plot/entrySpectrum';
+import type { Range } from './plot/plotMath';
 import { CATEGORY_LABEL } from './LibraryList';
 
 const COLUMNS: Column<{ s: Signal; i: number }>[] = [
@@ -19,7 +20,7 @@ const COLUMNS: Column<{ s: Signal; i: number }>[] = [
 ];
 
 /** One entry: what it is, where it comes from, its signals and a simulated spectrum. */
-export function EntryDetail({ entry }: { entry: LibraryEntry }) {
+export function EntryDetail({ entry, plotDomain = null }: { entry: LibraryEntry; plotDomain?: Range | null }) {
   const t = useTheme();
   const nuclei = [...new Set(entry.signals.map((s) => s.nucleus))] as Nucleus[];
   const [nucleus, setNucleus] = useState<Nucleus>(nuclei[0] ?? '1H');
@@ -55,6 +56,7 @@ export function EntryDetail({ entry }: { entry: LibraryEntry }) {
       <SpectrumPlot
         label={`Simulated ${nucleus} spectrum of ${entry.name}`}
         height={200}
+        domain={nucleus === '1H' ? plotDomain : null}
         traces={[{ key: 'sim', label: `simulated ${nucleus}, ${entry.mhz} MHz, first-order, Lorentzian lines`, colour: 'plotFit', x: sim.x, y: sim.y }]}
       />
       {entry.notes ? <Text style={[styles.notes, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>{entry.notes}</Text> : null}

@@ -21,6 +21,8 @@ export interface SpectrumPlotProps {
   /** Accessible name of the plot. */
   label: string;
   height?: number;
+  /** ppm span of the whole view (default: the traces' own extent), e.g. to draw two entries alike. */
+  domain?: Range | null;
 }
 
 const PAD = { left: 8, right: 8, top: 8, bottom: 26 };
@@ -29,10 +31,10 @@ const PAD = { left: 8, right: 8, top: 8, bottom: 26 };
  * Our spectrum drawing: ppm decreasing to the right as spectra are drawn in the trade; drag across
  * the plot to zoom into a region, "Whole spectrum" to go back.
  */
-export function SpectrumPlot({ traces, label, height = 260 }: SpectrumPlotProps) {
+export function SpectrumPlot({ traces, label, height = 260, domain = null }: SpectrumPlotProps) {
   const t = useTheme();
   const [width, setWidth] = useState(0);
-  const full = useMemo(() => xExtent(traces.map((tr) => tr.x)), [traces]);
+  const full = useMemo(() => domain ?? xExtent(traces.map((tr) => tr.x)), [traces, domain]);
   const [zoom, setZoom] = useState<Range | null>(null);
   const [drag, setDrag] = useState<{ a: number; b: number } | null>(null);
   const range = zoom ?? full;

@@ -4,6 +4,8 @@ import { useQueryClient } from '@tanstack/react-query';
 import { syncRun, SYNC_LAST_KEY, type SyncOutcome, type SyncProgress } from '../../client/sync';
 import { settingGet } from '../../localdb/settings';
 import { useSession } from './SessionProvider';
+import { libraryKeys } from '../../queries/library';
+import { outboxKeys } from '../../queries/outbox';
 
 interface SyncState {
   running: boolean;
@@ -33,24 +35,42 @@ export function SyncProvider({ children }: { children: ReactNode }) {
     settingGet(SYNC_LAST_KEY).then(setLastAt, () => undefined);
   }, []);
 
+  const again = useRef(false);
   const syncNow = useCallback((): Promise<void> => {
     if (!role) return Promise.resolve();
-    if (inFlight.current) return inFlight.current;
-    setRunning(true);
-    setError(null);
-    const round = syncRun(request, role, setProgress)
-      .then((outcome) => {
+    // Asked while a round runs (e.g. a submission saved during the start-up sync): that round may
+    // be past its push, so one more round follows it.
+    if (inFlight.current) {
+      again.current = true;
+      return inFlight.current;
+    }
+    const runRound = async (): Promise<void> => {
+      setRunning(true);
+      setError(null);
+      try {
+        const outcome = await syncRun(request, role, setProgress);
         setLastOutcome(outcome);
         setLastAt(outcome.finishedAt);
-      })
-      .catch((err: unknown) => setError(err))
-      .finally(() => {
-        inFlight.current = null;
-        setRunning(false);
+      } catch (err) {
+        setError(err);
+        again.current = false; // offline: the next trigger (reconnect, sync now) retries
+      } finally {
         setProgress(null);
-        // Whatever part of the round finished is in the local database now.
-        void qc.invalidateQueries();
-      });
+        // Whatever part of the round finished is in the local database now. Only the local
+        // reads: re-reading server-side screens (review, admin) here would swap a form under
+        // the person filling it.
+        void qc.invalidateQueries({ queryKey: libraryKeys.all });
+        void qc.invalidateQueries({ queryKey: outboxKeys.all });
+      }
+      if (again.current) {
+        again.current = false;
+        await runRound();
+      }
+    };
+    const round = runRound().finally(() => {
+      inFlight.current = null;
+      setRunning(false);
+    });
     inFlight.current = round;
     return round;
   }, [request, role, qc]);

@@ -26,6 +26,9 @@ export function ReviewDetail({ id }: { id: string }) {
   if (q.isError || !q.data) return <Notice tone="danger" text={describeError(q.error)} />;
   const { submission: s, nearest, current } = q.data;
   const other = current ?? nearest?.entry ?? null;
+  // Both 1H spectra on one ppm span, so the curator compares like with like.
+  const shifts = [s.entry, ...(other ? [other] : [])].flatMap((e) => e.signals.filter((x) => x.nucleus === '1H').map((x) => x.shift));
+  const domain = shifts.length ? { lo: Math.min(...shifts) - 0.3, hi: Math.max(...shifts) + 0.3 } : null;
   const decided = s.status !== 'pending';
 
   const send = () => {
@@ -62,11 +65,11 @@ export function ReviewDetail({ id }: { id: string }) {
       <View style={[styles.side, wide && styles.sideWide]}>
         <View style={[styles.pane, { borderColor: t.colours.accent, borderRadius: t.radius.md }]}>
           <Text style={[styles.paneHead, { color: t.colours.accent, fontFamily: t.fonts.semibold }]}>Proposed</Text>
-          <EntryDetail entry={s.entry} />
+          <EntryDetail entry={s.entry} plotDomain={domain} />
         </View>
         <View style={[styles.pane, { borderColor: t.colours.border, borderRadius: t.radius.md }]}>
           <Text style={[styles.paneHead, { color: t.colours.textMuted, fontFamily: t.fonts.semibold }]}>{current ? 'Current revision' : 'Nearest existing entry'}</Text>
-          {other ? <EntryDetail entry={other} /> : <Notice text="No existing entry is close to this one." />}
+          {other ? <EntryDetail entry={other} plotDomain={domain} /> : <Notice text="No existing entry is close to this one." />}
         </View>
       </View>
       {decided ? (
