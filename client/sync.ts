@@ -4,7 +4,7 @@ import { LibraryListResponseSchema } from '../shared/api/library';
 import type { Role } from '../shared/user';
 import type { RequestOptions } from './api';
 import { ApiError, OfflineError } from './api';
-import { localLibraryUpsert } from '../localdb/library';
+import { localLibraryRetainOnly, localLibraryUpsert } from '../localdb/library';
 import { snapshotLoadIfEmpty } from '../localdb/snapshot';
 import { outboxList, outboxPending, outboxUpdate, type OutboxItem } from '../localdb/outbox';
 import { SubmissionResponseSchema } from '../shared/api/submissions';
@@ -83,17 +83,22 @@ export async function syncRun(request: Request, role: Role, onProgress: (p: Sync
   progress.phase = 'pulling';
   onProgress({ ...progress });
   let cursor = await settingGet(SYNC_CURSOR_KEY);
+  // A pull from the very beginning sees every entry the server knows; entries of the shipped
+  // snapshot it never mentions are not in the shared library and go once the pass completes.
+  const seen: Set<string> | null = cursor ? null : new Set();
   try {
     for (;;) {
       const qs = new URLSearchParams({ limit: String(PAGE), ...(cursor ? { cursor } : {}) });
       const page = SyncChangesResponseSchema.parse(await request<unknown>(`/api/sync/changes?${qs}`));
       await localLibraryUpsert(page.changes.map((c) => (c.retired ? { ...c.entry, retired: true } : c.entry)));
+      for (const c of page.changes) seen?.add(c.entryId);
       cursor = page.nextCursor;
       await settingSet(SYNC_CURSOR_KEY, cursor);
       progress.pulled += page.changes.length;
       onProgress({ ...progress });
       if (!page.hasMore || page.changes.length === 0) break;
     }
+    if (seen && seen.size > 0) await localLibraryRetainOnly(seen);
   } catch (err) {
     // A server without the sync routes yet: take the whole approved list instead.
     if (!(err instanceof ApiError && err.status === 404)) throw err;

@@ -45,3 +45,12 @@ export async function localLibraryUpsert(entries: LibraryEntry[]): Promise<void>
     }
   }));
 }
+
+/** Removes every entry whose id is not in `keep` (after a complete pull from the beginning). Returns how many went. */
+export async function localLibraryRetainOnly(keep: ReadonlySet<string>): Promise<number> {
+  const db = await getLocalDb();
+  const repo = db.getRepository(LocalLibraryEntry);
+  const ids = (await repo.find({ select: { id: true } })).map((r) => r.id).filter((id) => !keep.has(id));
+  if (ids.length) await withWriteLock(() => repo.delete(ids));
+  return ids.length;
+}
