@@ -44,7 +44,8 @@ export function roleCanSubmit(role: Role): boolean {
  * (the server treats a repeated client UUID as a duplicate) and the cursor only moves after the
  * page it covers has been stored.
  */
-export async function syncRun(request: Request, role: Role, onProgress: (p: SyncProgress) => void): Promise<SyncOutcome> {
+export async function syncRun(request: Request, user: { id: string; role: Role }, onProgress: (p: SyncProgress) => void): Promise<SyncOutcome> {
+  const role = user.role;
   await snapshotLoadIfEmpty();
   const progress: SyncProgress = { phase: 'pushing', pushed: 0, pulled: 0 };
   let refused = 0;
@@ -52,7 +53,7 @@ export async function syncRun(request: Request, role: Role, onProgress: (p: Sync
 
   if (roleCanSubmit(role)) {
     onProgress({ ...progress });
-    const all = await outboxPending();
+    const all = await outboxPending(user.id);
     const pending = all.filter((i) => i.kind === 'submission');
     for (const item of all.filter((i) => i.kind === 'upload')) {
       if (await uploadPush(request, item)) progress.pushed += 1;
@@ -110,7 +111,7 @@ export async function syncRun(request: Request, role: Role, onProgress: (p: Sync
   if (roleCanSubmit(role)) {
     progress.phase = 'checking';
     onProgress({ ...progress });
-    const mine = await outboxList();
+    const mine = await outboxList(user.id);
     if (mine.some((m) => m.status === 'sent')) {
       const res = SubmissionListResponseSchema.parse(await request<unknown>('/api/submissions?limit=200'));
       const byId = new Map(res.items.map((s) => [s.id, s]));

@@ -25,7 +25,7 @@ export function AccountPanel() {
       </Text>
       <Text style={[styles.text, { color: t.colours.text, fontFamily: t.fonts.regular }]}>{ROLE_TEXT[u.role]}</Text>
       <Text style={[styles.text, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>
-        Your session is kept on this device, so the app opens signed in with no connection. History and unsent work stay on this device after you sign out.
+        Your session is kept on this device, so the app opens signed in with no connection. History stays on this device after you sign out; your unsent submissions wait until you sign in here again (nobody else on the device sends them).
       </Text>
       <Button label="Sync status" variant="quiet" onPress={() => router.push('/sync')} />
       <Button label="Sign out" accessibleName="Sign out of this device" onPress={() => void signOut()} />

@@ -7,10 +7,11 @@ import { LocalAnalysis } from './entities/LocalAnalysis';
 import { LocalOutboxItem } from './entities/LocalOutboxItem';
 import { LocalInit1733000000000 } from './migrations/1733000000000-LocalInit';
 import { LocalWork1733100000000 } from './migrations/1733100000000-LocalWork';
+import { OutboxOwner1733200000000 } from './migrations/1733200000000-OutboxOwner';
 
 /** Every local entity; add new ones here and a migration beside them. */
 export const LOCAL_ENTITIES = [LocalLibraryEntry, LocalSetting, LocalAnalysis, LocalOutboxItem];
-export const LOCAL_MIGRATIONS = [LocalInit1733000000000, LocalWork1733100000000];
+export const LOCAL_MIGRATIONS = [LocalInit1733000000000, LocalWork1733100000000, OutboxOwner1733200000000];
 
 let ready: Promise<DataSource> | null = null;
 

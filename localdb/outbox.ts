@@ -22,23 +22,24 @@ function toItem(r: LocalOutboxItem): OutboxItem {
 }
 
 /** Queue work for the server. Written before any network call, so nothing is lost offline. */
-export async function outboxAdd(item: { id: string; kind?: OutboxItem['kind']; title: string; body: unknown }): Promise<void> {
+export async function outboxAdd(item: { id: string; userId: string; kind?: OutboxItem['kind']; title: string; body: unknown }): Promise<void> {
   const db = await getLocalDb();
   const repo = db.getRepository(LocalOutboxItem);
   const now = new Date().toISOString();
-  const row = repo.create({ id: item.id, kind: item.kind ?? 'submission', status: 'pending', title: item.title, body: JSON.stringify(item.body), serverId: null, message: null, createdAt: now, updatedAt: now });
+  const row = repo.create({ id: item.id, userId: item.userId, kind: item.kind ?? 'submission', status: 'pending', title: item.title, body: JSON.stringify(item.body), serverId: null, message: null, createdAt: now, updatedAt: now });
   await withWriteLock(() => repo.save(row));
 }
 
-export async function outboxList(): Promise<OutboxItem[]> {
+/** One account's items, newest first. */
+export async function outboxList(userId: string): Promise<OutboxItem[]> {
   const db = await getLocalDb();
-  const rows = await db.getRepository(LocalOutboxItem).find({ order: { createdAt: 'DESC' } });
+  const rows = await db.getRepository(LocalOutboxItem).find({ where: { userId }, order: { createdAt: 'DESC' } });
   return rows.map(toItem);
 }
 
-export async function outboxPending(): Promise<OutboxItem[]> {
+export async function outboxPending(userId: string): Promise<OutboxItem[]> {
   const db = await getLocalDb();
-  const rows = await db.getRepository(LocalOutboxItem).find({ where: { status: 'pending' }, order: { createdAt: 'ASC' } });
+  const rows = await db.getRepository(LocalOutboxItem).find({ where: { status: 'pending', userId }, order: { createdAt: 'ASC' } });
   return rows.map(toItem);
 }
 

@@ -30,6 +30,7 @@ export function SyncProvider({ children }: { children: ReactNode }) {
   const [error, setError] = useState<unknown>(null);
   const inFlight = useRef<Promise<void> | null>(null);
   const role = session?.user.role ?? null;
+  const userId = session?.user.id ?? null;
 
   useEffect(() => {
     settingGet(SYNC_LAST_KEY).then(setLastAt, () => undefined);
@@ -37,7 +38,7 @@ export function SyncProvider({ children }: { children: ReactNode }) {
 
   const again = useRef(false);
   const syncNow = useCallback((): Promise<void> => {
-    if (!role) return Promise.resolve();
+    if (!role || !userId) return Promise.resolve();
     // Asked while a round runs (e.g. a submission saved during the start-up sync): that round may
     // be past its push, so one more round follows it.
     if (inFlight.current) {
@@ -48,7 +49,7 @@ export function SyncProvider({ children }: { children: ReactNode }) {
       setRunning(true);
       setError(null);
       try {
-        const outcome = await syncRun(request, role, setProgress);
+        const outcome = await syncRun(request, { id: userId!, role }, setProgress);
         setLastOutcome(outcome);
         setLastAt(outcome.finishedAt);
       } catch (err) {
@@ -73,7 +74,7 @@ export function SyncProvider({ children }: { children: ReactNode }) {
     });
     inFlight.current = round;
     return round;
-  }, [request, role, qc]);
+  }, [request, role, userId, qc]);
 
   useEffect(() => {
     if (!role) return;
@@ -83,7 +84,7 @@ export function SyncProvider({ children }: { children: ReactNode }) {
     window.addEventListener('online', onOnline);
     return () => window.removeEventListener('online', onOnline);
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [role]);
+  }, [role, userId]);
 
   const value = useMemo(() => ({ running, progress, lastAt, lastOutcome, error, syncNow }), [running, progress, lastAt, lastOutcome, error, syncNow]);
   return <SyncContext.Provider value={value}>{children}</SyncContext.Provider>;

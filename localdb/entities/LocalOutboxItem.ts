@@ -12,6 +12,10 @@ export class LocalOutboxItem {
   @Column({ type: 'varchar', length: 20 })
   kind: string;
 
+  /** The account that made it; only that account's sync sends it. */
+  @Column({ type: 'varchar', length: 80, nullable: true })
+  userId: string | null;
+
   /** pending → sent (server has it) → approved / rejected / changes_requested; or failed (refused on push). */
   @Column({ type: 'varchar', length: 20 })
   status: string;
