@@ -12,12 +12,13 @@ export const FitOptionsSchema = z.object({
   cutoff: z.number().positive().max(0.1).optional().describe('a spectrum column is evaluated where a line exceeds cutoff × its height (default 1e-9: Lorentzian tails are long; larger values trade precision for speed)'),
   noiseLevel: z.number().positive().optional().describe('RMS noise of the mixture intensities; default: estimated (spectra) or unknown (peak lists)'),
   unexplainedFraction: z.number().min(0).max(1).optional().describe('a mixture peak is unexplained when the fit reaches less than this fraction of it (default 0.5)'),
+  minCoverage: z.number().min(0).max(1).optional().describe('candidates whose nuclei the mixture supports less than this share of are rejected (default 0: off — on picked peak lists a true compound can fall below 0.5)'),
   curves: z.boolean().optional().describe('return the axis and curves (default true; false leaves them empty, e.g. for decoy fits)'),
   includeExchangeable: z.boolean().optional().describe('simulate OH/NH signals marked exchangeable too (default false: their position and width vary)'),
 });
 export type FitOptions = z.infer<typeof FitOptionsSchema>;
 
-export const RejectionReasonSchema = z.enum(['zero-amount', 'below-share', 'below-detection', 'no-lines']);
+export const RejectionReasonSchema = z.enum(['zero-amount', 'below-share', 'below-detection', 'missing-signals', 'no-lines']);
 export type RejectionReason = z.infer<typeof RejectionReasonSchema>;
 
 /** One candidate kept by the fit. Amounts are per nucleus, so they compare as mole ratios. */

@@ -7,6 +7,7 @@ import { nucleusFrequency } from '../lineshape/nucleusFrequency';
 import { entryToLines, type EntryLine } from '../multiplets/entryToLines';
 import { fitDesignPeaks } from './fitDesignPeaks';
 import { fitDesignSpectrum } from './fitDesignSpectrum';
+import { fitCoverage } from './fitCoverage';
 import { fitEvidence } from './fitEvidence';
 import { fitNormalEquations } from './fitNormalEquations';
 import { fitSearchOffsets } from './fitSearchOffsets';
@@ -76,6 +77,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     unexplainedFraction = 0.5,
     includeExchangeable = false,
     curves: withCurves = true,
+    minCoverage = 0,
   } = parsed.data;
   const freq = nucleusFrequency(nucleus, mixture.mhz);
   const estimate = parsed.data.linewidthHz === undefined ? mixtureEstimateLinewidth(mixture) : null;
@@ -159,8 +161,8 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   let c: Float64Array = new Float64Array(0);
   let G: Float64Array[] = [];
   let h: Float64Array = new Float64Array(0);
-  const solveAndReject = (on: FitDesign, record: boolean): number[] => {
-    let act = kept.map((_, i) => i);
+  const solveAndReject = (on: FitDesign, record: RejectedCandidate[] | null, excluded: Set<number> = new Set()): number[] => {
+    let act = kept.map((_, i) => i).filter((i) => !excluded.has(i));
     // Normal equations of every candidate once; each pass takes the rows of those still in.
     const all = fitNormalEquations(on, current);
     for (let pass = 0; pass < 5; pass++) {
@@ -175,7 +177,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
         const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
         const { entry } = kept[i];
         const reject = (reason: RejectedCandidate['reason'], message: string) => {
-          if (record) rejected.push({ entryId: entry.id, name: entry.name, reason, message, share });
+          record?.push({ entryId: entry.id, name: entry.name, reason, message, share });
           drop.push(i);
         };
         if (!(c[a] > 0)) reject('zero-amount', 'the fit drove its amount to zero');
@@ -200,7 +202,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   // noise would pull the width down), then re-search offsets.
   if (mixture.kind === 'spectrum' && parsed.data.linewidthHz === undefined && kept.length > 0) {
     const r = rough();
-    const survivors = solveAndReject(r, false);
+    const survivors = solveAndReject(r, null);
     if (survivors.length > 0) {
       const sseAt = (widthHz: number) => {
         const all = linesAt(widthHz);
@@ -220,7 +222,41 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
       search(2);
     }
   }
-  const active = solveAndReject(design, true);
+  // A compound that is there shows its signals: one whose non-exchangeable nuclei the mixture
+  // supports less than minCoverage is dropped (worst first, one at a time) and the rest refitted.
+  // Off by default: picked peak lists lose weak and merged lines, and true compounds then fall
+  // below 0.5 (counting supported lines instead fails the same way).
+  const excluded = new Set<number>();
+  const missing: RejectedCandidate[] = [];
+  let fitRejections: RejectedCandidate[] = [];
+  let active: number[] = [];
+  for (let round = 0; round <= kept.length; round++) {
+    fitRejections = [];
+    active = solveAndReject(design, fitRejections, excluded);
+    if (minCoverage <= 0 || active.length === 0) break;
+    const cur = active.map((i) => current[i]);
+    const sigs = signalsOf(current);
+    let worst = -1;
+    let worstCoverage = Infinity;
+    active.forEach((i, a) => {
+      const cov = fitCoverage(rough(), c, cur, sigs[i], a);
+      if (cov < worstCoverage) {
+        worstCoverage = cov;
+        worst = a;
+      }
+    });
+    if (worstCoverage >= minCoverage) break;
+    const i = active[worst];
+    excluded.add(i);
+    missing.push({
+      entryId: kept[i].entry.id,
+      name: kept[i].entry.name,
+      reason: 'missing-signals',
+      message: `the mixture supports only ${(worstCoverage * 100).toFixed(0)} % of its nuclei, below the ${(minCoverage * 100).toFixed(0)} % needed`,
+      share: 0,
+    });
+  }
+  rejected.push(...missing, ...fitRejections);
 
   const n = design.axis.length;
   const fitted = new Float64Array(n);
