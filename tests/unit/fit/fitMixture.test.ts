@@ -114,6 +114,21 @@ describe('fitMixture', () => {
     expect(r.unexplainedPeaks.length).toBe(1);
     expect(r.unexplainedPeaks[0].shift).toBeCloseTo(7.36, 3); // benzene in CDCl3, Gottlieb 1997 Table 1
   }, T);
+  it('with minCoverage, rejects a candidate whose other signals are missing', () => {
+    // Only the 9H singlet of tert-butyl methyl ether (1.19 ppm) is in the mixture, not its OCH3
+    // (3.22 ppm; Gottlieb 1997 Table 1): 9 of 12 nuclei supported.
+    const mtbe = get('tert-butyl-methyl-ether');
+    const half = { ...mtbe, signals: [mtbe.signals[0]] };
+    const mix = synthPeaks([...parts, { entry: half, amount: 0.5 }]);
+    const loose = fitMixture(mix, lib);
+    expect(loose.components.find((c) => c.entryId === mtbe.id)!.coverage).toBeCloseTo(0.75, 2);
+    const strict = fitMixture(mix, lib, { minCoverage: 0.8 });
+    expect(strict.rejected.find((x) => x.entryId === mtbe.id)).toMatchObject({
+      reason: 'missing-signals',
+      message: 'the mixture supports only 75 % of its nuclei, below the 80 % needed',
+    });
+    expect(strict.components.some((c) => c.entryId === mtbe.id)).toBe(false);
+  }, T);
   it('rejects a candidate below the settable share, with the reason', () => {
     const r = fitMixture(synthPeaks([...parts, { entry: get('methanol'), amount: 0.02 }]), lib, { minShare: 0.01 });
     const m = r.rejected.find((x) => x.entryId === 'methanol');
