@@ -1,2 +1,3 @@
 export * from './entryScore';
 export * from './multipletsMatchPeaks';
+export * from './signalToMultipletLines';

@@ -7,6 +7,13 @@ export interface MultipletLines {
   ppm: ArrayLike<number>;
   /** Relative line intensities, summing to 1. */
   weight: ArrayLike<number>;
+  /**
+   * Half the extent of an unresolved multiplet ("m", "br"; one line in `ppm`), ppm at the mixture's
+   * frequency; 0 or absent for resolved multiplets, whose extent their lines give.
+   */
+  halfExtentPpm?: number;
+  /** Nuclei of the signal; shares a merged band's intensity among unresolved multiplets. Default 1. */
+  nuclei?: number;
 }
 
 export interface MultipletPeakMatch {
@@ -20,6 +27,12 @@ export interface MultipletPeakMatch {
   deltaPpm: number;
   /** Intensity of the whole multiplet estimated from the matched peaks (0 when nothing matched). */
   intensity: number;
+  /**
+   * Shift error the score uses, ppm: deltaPpm, except for an unresolved multiplet. The maximum of
+   * an unresolved multiplet can sit anywhere inside its extent, so there the error is the distance
+   * of the matched peaks' centroid beyond the nearest edge of the extent (0 inside).
+   */
+  scoreDeltaPpm: number;
 }
 
 /** Peak indices [from, to) with shift in [lo, hi]; replaceable so a baseline can scan linearly. */
@@ -54,6 +67,7 @@ export function multipletsMatchPeaks(
   const propL: number[] = [];
   const propP: number[] = [];
   const propD: number[] = [];
+  const unresolved = new Uint8Array(multiplets.length);
   for (let m = 0; m < multiplets.length; m++) {
     const mult = multiplets[m];
     const L = mult.ppm;
@@ -61,14 +75,27 @@ export function multipletsMatchPeaks(
     const n = L.length;
     let from: number;
     let to: number;
-    if (window) [from, to] = window(L[0] - tol, L[n - 1] + tol);
+    const h = n === 1 ? (mult.halfExtentPpm ?? 0) : 0;
+    if (window) [from, to] = window(L[0] - tol - h, L[n - 1] + tol + h);
     else {
-      from = peaksLowerBound(shifts, L[0] - tol);
+      from = peaksLowerBound(shifts, L[0] - tol - h);
       to = from;
-      const hi = L[n - 1] + tol;
+      const hi = L[n - 1] + tol + h;
       while (to < shifts.length && shifts[to] <= hi) to++;
     }
     if (from >= to) continue;
+    if (h > 0) {
+      // Unresolved multiplet: its lines are unknown, so every peak inside its widened window is a
+      // candidate (misfit = distance to the centre, so a peak goes to the nearest centre).
+      unresolved[m] = 1;
+      for (let q = from; q < to; q++) {
+        propM.push(m);
+        propL.push(0);
+        propP.push(q);
+        propD.push(Math.abs(shifts[q] - L[0]));
+      }
+      continue;
+    }
     if (n === 1) {
       // One line (singlet, unresolved multiplet, 13C): the nearest peak, if within the tolerance.
       const q = nearest(shifts, from, to, L[0]);
@@ -131,10 +158,17 @@ export function multipletsMatchPeaks(
   for (let m = 0; m < multiplets.length; m++) lineBase[m + 1] = lineBase[m] + multiplets[m].ppm.length;
   const lineTo = new Int32Array(lineBase[multiplets.length]).fill(-1);
   const usedPeaks: number[] = [];
+  // An unresolved multiplet takes the free peak of its window nearest its centre. (Taking every
+  // peak of the window would sum other compounds' lines into it in a crowded region.)
+  const pooled: number[][] = multiplets.map(() => []);
   for (const i of order) {
     const key = lineBase[propM[i]] + propL[i];
-    if (lineTo[key] >= 0 || usedPeaks.includes(propP[i])) continue;
-    lineTo[key] = propP[i];
+    if (usedPeaks.includes(propP[i])) continue;
+    if (unresolved[propM[i]]) {
+      if (pooled[propM[i]].length > 0) continue;
+      pooled[propM[i]].push(propP[i]);
+    } else if (lineTo[key] >= 0) continue;
+    else lineTo[key] = propP[i];
     usedPeaks.push(propP[i]);
   }
   const out: MultipletPeakMatch[] = new Array(multiplets.length);
@@ -154,7 +188,8 @@ export function multipletsMatchPeaks(
     }
     if (pairs.length > 1) pairs.sort((a, b) => a[0] - b[0]);
     const peaks = pairs.map((q) => q[0]);
-    const r: MultipletPeakMatch = { peaks, linePpm: pairs.map((q) => mult.ppm[q[1]]), linesMatched: peaks.length, linesExpected: mult.ppm.length, deltaPpm: 0, intensity: 0 };
+    if (unresolved[m]) continue;
+    const r: MultipletPeakMatch = { peaks, linePpm: pairs.map((q) => mult.ppm[q[1]]), linesMatched: peaks.length, linesExpected: mult.ppm.length, deltaPpm: 0, intensity: 0, scoreDeltaPpm: 0 };
     if (peaks.length === 1) {
       const single = peaks[0];
       const toCentre = shifts[single] - mult.centre;
@@ -164,9 +199,66 @@ export function multipletsMatchPeaks(
       r.deltaPpm = sumD / peaks.length;
       r.intensity = sumI / sumW;
     }
+    r.scoreDeltaPpm = r.deltaPpm;
     out[m] = r;
   }
+  unresolvedBands(multiplets, unresolved, pooled, shifts, intensities, out);
   return out;
+}
+
+/**
+ * Results of the unresolved multiplets. Unresolved multiplets of one entry whose extents overlap are
+ * not separated at this field (at 80 MHz two "m" 0.15 ppm apart are one hump), so they form a band:
+ * every member gets the band's peaks (each member's nearest peak: one merged peak can stand for
+ * the whole band), the band's summed intensity is shared in proportion to nuclei, and the score's shift error is the centroid's distance beyond the band's edges.
+ * deltaPpm stays the plain observed centroid − the member's centre (intensity-weighted; the plain
+ * mean when every intensity is 0).
+ */
+function unresolvedBands(
+  multiplets: readonly MultipletLines[],
+  unresolved: Uint8Array,
+  pooled: number[][],
+  shifts: ArrayLike<number>,
+  intensities: ArrayLike<number>,
+  out: MultipletPeakMatch[],
+): void {
+  const members: number[] = [];
+  for (let m = 0; m < multiplets.length; m++) if (unresolved[m]) members.push(m);
+  if (members.length === 0) return;
+  members.sort((a, b) => multiplets[a].centre - multiplets[b].centre || a - b);
+  const half = (m: number) => multiplets[m].halfExtentPpm ?? 0;
+  let b0 = 0;
+  while (b0 < members.length) {
+    let b1 = b0 + 1;
+    let reach = multiplets[members[b0]].centre + half(members[b0]);
+    while (b1 < members.length && multiplets[members[b1]].centre - half(members[b1]) <= reach) {
+      reach = Math.max(reach, multiplets[members[b1]].centre + half(members[b1]));
+      b1++;
+    }
+    const band = members.slice(b0, b1);
+    const lo = Math.min(...band.map((m) => multiplets[m].centre - half(m)));
+    const peaks = [...new Set(band.flatMap((m) => pooled[m]))].sort((a, b) => a - b);
+    let sumI = 0;
+    let sumX = 0;
+    let sumPlain = 0;
+    for (const p of peaks) {
+      sumI += intensities[p];
+      sumX += intensities[p] * shifts[p];
+      sumPlain += shifts[p];
+    }
+    const centroid = peaks.length === 0 ? 0 : sumI > 0 ? sumX / sumI : sumPlain / peaks.length;
+    const beyond = centroid < lo ? centroid - lo : centroid > reach ? centroid - reach : 0;
+    let nuclei = 0;
+    for (const m of band) nuclei += multiplets[m].nuclei ?? 1;
+    for (const m of band) {
+      const c = multiplets[m].centre;
+      out[m] =
+        peaks.length === 0
+          ? { peaks: [], linePpm: [], linesMatched: 0, linesExpected: 1, deltaPpm: 0, intensity: 0, scoreDeltaPpm: 0 }
+          : { peaks: [...peaks], linePpm: peaks.map(() => c), linesMatched: 1, linesExpected: 1, deltaPpm: centroid - c, intensity: (sumI * (multiplets[m].nuclei ?? 1)) / nuclei, scoreDeltaPpm: beyond };
+    }
+    b0 = b1;
+  }
 }
 
 /** Index in [from, to) of the shift closest to v, or −1 for an empty range. */

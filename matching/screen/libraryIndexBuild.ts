@@ -1,8 +1,8 @@
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Nucleus } from '../../shared/nucleus';
 import type { Solvent } from '../../shared/solvent';
-import { multipletToLines } from '../multiplets/multipletToLines';
 import type { MultipletLines } from '../score/multipletsMatchPeaks';
+import { signalToMultipletLines } from '../score/signalToMultipletLines';
 
 /**
  * A library flattened into typed arrays and binned by shift, for one nucleus and one spectrometer
@@ -22,6 +22,7 @@ export interface LibraryIndex {
   sigNuclei: Float64Array;
   sigExchangeable: Uint8Array;
   sigShift: Float64Array;
+  /** Extent of each signal's lines, ppm, widened by the half extent of an unresolved multiplet. */
   sigLo: Float64Array;
   sigHi: Float64Array;
   /** Lines of signal s are lineStart[s] … lineStart[s+1]−1. */
@@ -55,7 +56,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
   const binWidth = options.binWidthPpm ?? (nucleus === '13C' ? 0.1 : 0.01);
   if (!(binWidth > 0)) throw new RangeError(`binWidthPpm must be positive, got ${binWidth}`);
   const kept: LibraryEntry[] = [];
-  const sigs: Array<{ e: number; src: number; n: number; x: boolean; shift: number; ppm: number[]; w: number[] }> = [];
+  const sigs: Array<{ e: number; src: number; n: number; x: boolean; shift: number; ppm: ArrayLike<number>; w: ArrayLike<number>; h: number }> = [];
   const sigStartList: number[] = [];
   for (const entry of entries) {
     if (entry.retired && !options.includeRetired) continue;
@@ -67,9 +68,8 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     sigStartList.push(sigs.length);
     for (const [s, i] of mine) {
       // Line positions and binomial weights from the multiplet simulation (first order).
-      const sim = s.nucleus === '1H' ? multipletToLines(s, mhz) : [{ shift: s.shift, area: s.nuclei }];
-      const lines = { ppm: sim.map((l) => l.shift), weight: sim.map((l) => l.area / s.nuclei) };
-      sigs.push({ e, src: i, n: s.nuclei, x: s.nucleus === '1H' && s.exchangeable === true, shift: s.shift, ppm: lines.ppm, w: lines.weight });
+      const lines = signalToMultipletLines(s, mhz);
+      sigs.push({ e, src: i, n: s.nuclei, x: s.nucleus === '1H' && s.exchangeable === true, shift: s.shift, ppm: lines.ppm, w: lines.weight, h: lines.halfExtentPpm ?? 0 });
     }
   }
   sigStartList.push(sigs.length);
@@ -101,13 +101,13 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
       linePpm[l] = s.ppm[i];
       lineWeight[l] = s.w[i];
     }
-    sigLo[k] = Math.min(s.shift, s.ppm[0]);
-    sigHi[k] = Math.max(s.shift, s.ppm[s.ppm.length - 1]);
+    sigLo[k] = Math.min(s.shift, s.ppm[0]) - s.h;
+    sigHi[k] = Math.max(s.shift, s.ppm[s.ppm.length - 1]) + s.h;
     minShift = Math.min(minShift, sigLo[k]);
     maxShift = Math.max(maxShift, sigHi[k]);
   });
   lineStart[S] = l;
-  const sigLines: MultipletLines[] = sigs.map((s, k) => ({ centre: s.shift, ppm: linePpm.subarray(lineStart[k], lineStart[k + 1]), weight: lineWeight.subarray(lineStart[k], lineStart[k + 1])}));
+  const sigLines: MultipletLines[] = sigs.map((s, k) => ({ centre: s.shift, ppm: linePpm.subarray(lineStart[k], lineStart[k + 1]), weight: lineWeight.subarray(lineStart[k], lineStart[k + 1]), nuclei: s.n, ...(s.h > 0 ? { halfExtentPpm: s.h } : {}) }));
   for (let e = 0; e < kept.length; e++) {
     let req = 0;
     let all = 0;

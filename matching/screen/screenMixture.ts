@@ -45,7 +45,7 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
       nuclei: index.sigNuclei[m.signal],
       exchangeable: index.sigExchangeable[m.signal] === 1 || shiftInRegions(index.sigShift[m.signal], set.regions),
       matched: m.linesMatched > 0,
-      deltaPpm: m.deltaPpm,
+      deltaPpm: m.scoreDeltaPpm,
       intensity: m.intensity,
     }));
     const score = entryScore(summaries, { tolerancePpm: tol });

@@ -28,7 +28,7 @@ export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, ent
   // Groups and shadowing are worked out among the reported candidates only.
   if (found.length > prep.maxCandidates) found = found.slice(0, prep.maxCandidates);
   const peakSets = found.map((f) => [...new Set(f.matches.flatMap((m) => m.peaks))].sort((x, y) => x - y));
-  const relations = candidatesRelate(found.map((f, i) => ({ entryId: f.entry.id, peaks: peakSets[i], explainedShare: f.score.explainedShare })));
+  const relations = candidatesRelate(found.map((f, i) => ({ entryId: f.entry.id, peaks: peakSets[i], explainedShare: f.score.explainedShare, ...(f.entry.nearDuplicateOf ? { nearDuplicateOf: f.entry.nearDuplicateOf } : {}) })));
   const built: ScreenCandidate[] = found.map((f, i) => candidateBuild(f, i, prep.set.regions));
   built.forEach((c, i) => {
     c.ambiguityGroup = relations.groupOf[i];

@@ -170,6 +170,28 @@ describe('screenMixture: ambiguity', () => {
   });
 });
 
+describe('screenMixture: marked near duplicates', () => {
+  // Invented pair of diastereomers, 0.01–0.03 ppm apart (the library marks them nearDuplicateOf).
+  const threo = { ...entry('threo', [{ shift: 0.88, nuclei: 3, multiplicity: 't', j: [7.4] }, { shift: 4.02, nuclei: 1, multiplicity: 'd', j: [4] }]), nearDuplicateOf: ['erythro'] };
+  const erythro = { ...entry('erythro', [{ shift: 0.89, nuclei: 3, multiplicity: 't', j: [7.4] }, { shift: 4.05, nuclei: 1, multiplicity: 'd', j: [4.4] }]), nearDuplicateOf: ['threo'] };
+  const peaks = threo.signals.flatMap((s) => split(s, 400).map((l) => ({ shift: l.shift, intensity: l.area })));
+  const m: PeakListMixture = { ...empty, mhz: 400, peaks };
+
+  it('reports both in one ambiguity group instead of one shadowing the other', () => {
+    const r = screenMixture(m, [threo, erythro]);
+    expect(r.candidates.map((c) => c.entryId)).toEqual(['threo', 'erythro']);
+    expect(r.ambiguityGroups).toHaveLength(1);
+    expect(r.ambiguityGroups[0].members).toEqual(['threo', 'erythro']);
+    expect(r.candidates.every((c) => c.ambiguityGroup === 'G1' && c.shadowedBy.length === 0)).toBe(true);
+  });
+
+  it('does not group the same two entries when they are not marked', () => {
+    const r = screenMixture(m, [{ ...threo, nearDuplicateOf: undefined }, { ...erythro, nearDuplicateOf: undefined }]);
+    expect(r.ambiguityGroups).toEqual([]);
+    expect(r.candidates.find((c) => c.entryId === 'erythro')?.shadowedBy).toEqual(['threo']);
+  });
+});
+
 describe('screenMixture: signals', () => {
   // Gottlieb 1997 Table 1, CDCl3: ethanol CH3 1.25 t, CH2 3.72 q, OH 1.32 (exchangeable).
   it('does not penalise a missing exchangeable OH', () => {
@@ -254,14 +276,16 @@ describe('screenMixture: properties', () => {
             `e${i}`,
             Array.from({ length: 1 + Math.floor(rand() * 4) }, () => {
               const kind = rand();
-              return kind < 0.5 ? { shift: 0.5 + rand() * 8, nuclei: 1 + Math.floor(rand() * 3) } : { shift: 0.5 + rand() * 8, nuclei: 2, multiplicity: kind < 0.75 ? 't' : 'q', j: [5 + rand() * 3] };
+              if (kind < 0.4) return { shift: 0.5 + rand() * 8, nuclei: 1 + Math.floor(rand() * 3) };
+              if (kind < 0.6) return { shift: 0.5 + rand() * 8, nuclei: 1 + Math.floor(rand() * 2), multiplicity: 'm' };
+              return { shift: 0.5 + rand() * 8, nuclei: 2, multiplicity: kind < 0.8 ? 't' : 'q', j: [5 + rand() * 3] };
             }),
           ),
         );
         const picked = entries.filter(() => rand() < 0.15);
         const peaks = picked.flatMap((e) => e.signals.flatMap((s) => split(s, 500).map((l) => ({ shift: l.shift + (rand() - 0.5) * 0.01, intensity: l.area * (0.9 + rand() * 0.2) }))));
         for (let k = 0; k < 30; k++) peaks.push({ shift: 0.5 + rand() * 8, intensity: rand() });
-        const m: PeakListMixture = { ...empty, solvent: 'other', mhz: 500, peaks };
+        const m: PeakListMixture = { ...empty, solvent: 'other', mhz: rand() < 0.5 ? 500 : 80, peaks };
         // the whole result: candidates, evidence, groups, shadowing, peaks
         expect(screenMixture(m, entries, { minScore: 0.3 })).toEqual(screenAllPairs(m, entries, { minScore: 0.3 }));
       }),
