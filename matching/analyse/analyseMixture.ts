@@ -78,6 +78,13 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
     }
   }
   if (fit.linewidthSource === 'default') warnings.push(`linewidth unknown: ${fit.linewidthHz} Hz assumed`);
+  const fittedIds = new Set(fit.components.map((c) => c.entryId));
+  const pairs = new Set<string>();
+  for (const e of library) {
+    if (!fittedIds.has(e.id)) continue;
+    for (const other of e.nearDuplicateOf ?? []) if (fittedIds.has(other)) pairs.add([e.id, other].sort().join(' and '));
+  }
+  for (const p of pairs) warnings.push(`${p} are near-duplicates in the library: how the fit splits intensity between them is uncertain`);
   if (fit.unexplainedPeaks.length > 0) warnings.push(`${fit.unexplainedPeaks.length} mixture peak(s) not explained by any fitted compound`);
   for (const g of screen.ambiguityGroups) warnings.push(`screening could not tell apart: ${g.members.join(', ')}`);
   const references = library.filter((e) => e.category === 'reference' && e.id !== standard?.entryId).map((e) => e.id);

@@ -82,6 +82,15 @@ describe('analyseMixture', () => {
     expect(qs[qs.length >> 1]).toBeGreaterThanOrEqual(0.5);
   }, T);
 
+  it('warns when two fitted compounds are near-duplicates in the library', () => {
+    // An invented isomer of ethanol with its multiplets moved (3.60 q, 1.31 t), marked as close to it.
+    const e = get('ethanol');
+    const twin: LibraryEntry = { ...e, id: 'ethanol-twin', name: 'ethanol twin', nearDuplicateOf: ['ethanol'], signals: e.signals.map((sg) => ({ ...sg, shift: sg.shift > 2 ? 3.6 : 1.31 })) };
+    const r = analyseMixture(synthPeaks([...parts, { entry: twin, amount: 0.7 }]), [...lib, twin], { decoySets: 2 });
+    expect(r.fit.components.map((c) => c.entryId)).toEqual(expect.arrayContaining(['ethanol', 'ethanol-twin']));
+    expect(r.warnings).toContain('ethanol and ethanol-twin are near-duplicates in the library: how the fit splits intensity between them is uncertain');
+  }, T);
+
   it('gives concentrations through a named internal standard and warns when its nuclei differ', () => {
     const withStd = [...parts, { entry: get('1-4-dioxane'), amount: 0.25 }];
     const r = analyseMixture(synthPeaks(withStd), lib, { standard: { entryId: '1-4-dioxane', concentrationMM: 2, nuclei: 4 }, decoySets: 2 });
