@@ -19,7 +19,12 @@ export function ResultView({ analysis }: { analysis: StoredAnalysis }) {
   const t = useTheme();
   const router = useRouter();
   const rows = useMemo(() => analysisRows(analysis), [analysis]);
-  const [selected, setSelected] = useState<string | null>(rows.find((r) => r.confirmed)?.entryId ?? rows[0]?.entryId ?? null);
+  const [selected, setSelected] = useState<string | null>(
+    // The largest confirmed compound first (not the standard or a reference).
+    rows.filter((r) => r.confirmed && r.amount && !r.amount.isStandard && r.screen.category !== 'reference').sort((a, b) => b.amount!.moleFraction - a.amount!.moleFraction)[0]?.entryId ??
+      rows[0]?.entryId ??
+      null,
+  );
   const row = rows.find((r) => r.entryId === selected) ?? null;
   const { fit } = analysis.report;
   const traces = useMemo<PlotTrace[]>(() => {
