@@ -174,7 +174,9 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
       const total = Math.max(on.totalIntensity, explained);
       act.forEach((i, a) => {
         const share = total > 0 ? Math.min(1, (c[a] * on.modelIntensity(current[i])) / total) : 0;
-        const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
+        const ratio = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
+    // A noise level so small that the ratio overflows means "noise unknown" for the report.
+    const snr = ratio !== null && Number.isFinite(ratio) ? ratio : null;
         const { entry } = kept[i];
         const reject = (reason: RejectedCandidate['reason'], message: string) => {
           record?.push({ entryId: entry.id, name: entry.name, reason, message, share });
@@ -301,7 +303,9 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   const components: FitComponent[] = active.map((i, a) => {
     const { entry, nuclei } = kept[i];
     const ev = fitEvidence(design, G, h, c, active.map((k) => current[k]), activeSignals, a, fitted, rough(), curves[a]);
-    const snr = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
+    const ratio = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
+    // A noise level so small that the ratio overflows means "noise unknown" for the report.
+    const snr = ratio !== null && Number.isFinite(ratio) ? ratio : null;
     const share = totalExplained > 0 ? Math.min(1, (c[a] * design.modelIntensity(current[i])) / totalExplained) : 0;
     return {
       entryId: entry.id,
