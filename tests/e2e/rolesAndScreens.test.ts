@@ -17,6 +17,7 @@ async function navLabels(page: Page, url: string, viewport: ViewportName): Promi
   if (viewport === 'phone') {
     await page.goto(`${url}/more`);
     await page.getByRole('heading', { name: 'More' }).waitFor();
+    await screenshot(page, 'more-phone');
     labels.push(...(await page.getByRole('link', { name: /^Open / }).allInnerTexts()));
   }
   return labels.map((l) => l.replace(/^\W+\s*/, '').trim());
