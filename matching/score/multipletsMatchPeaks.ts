@@ -28,9 +28,9 @@ export interface MultipletPeakMatch {
   /** Intensity of the whole multiplet estimated from the matched peaks (0 when nothing matched). */
   intensity: number;
   /**
-   * Shift error the score uses, ppm: deltaPpm, except for an unresolved multiplet. The maximum of
-   * an unresolved multiplet can sit anywhere inside its extent, so there the error is the distance
-   * of the matched peaks' centroid beyond the nearest edge of the extent (0 inside).
+   * Shift error the score uses, ppm: deltaPpm, except for an unresolved multiplet, whose window is
+   * widened by its half extent h: there the error is scaled by tol / max(tol, h), i.e. unchanged
+   * at high field (h ≤ tol) and measured in units of the extent at low field.
    */
   scoreDeltaPpm: number;
 }
@@ -160,7 +160,9 @@ export function multipletsMatchPeaks(
   const usedPeaks: number[] = [];
   // An unresolved multiplet takes the free peak of its window nearest its centre. (Taking every
   // peak of the window would sum other compounds' lines into it in a crowded region.)
-  const pooled: number[][] = multiplets.map(() => []);
+  let anyUnresolved = false;
+  for (let m = 0; m < multiplets.length; m++) if (unresolved[m]) anyUnresolved = true;
+  const pooled: number[][] = anyUnresolved ? multiplets.map(() => []) : [];
   for (const i of order) {
     const key = lineBase[propM[i]] + propL[i];
     if (usedPeaks.includes(propP[i])) continue;
@@ -202,7 +204,7 @@ export function multipletsMatchPeaks(
     r.scoreDeltaPpm = r.deltaPpm;
     out[m] = r;
   }
-  unresolvedBands(multiplets, unresolved, pooled, shifts, intensities, out);
+  if (anyUnresolved) unresolvedBands(multiplets, unresolved, pooled, shifts, intensities, tol, out);
   return out;
 }
 
@@ -220,6 +222,7 @@ function unresolvedBands(
   pooled: number[][],
   shifts: ArrayLike<number>,
   intensities: ArrayLike<number>,
+  tol: number,
   out: MultipletPeakMatch[],
 ): void {
   const members: number[] = [];
@@ -247,7 +250,11 @@ function unresolvedBands(
       sumPlain += shifts[p];
     }
     const centroid = peaks.length === 0 ? 0 : sumI > 0 ? sumX / sumI : sumPlain / peaks.length;
-    const beyond = centroid < lo ? centroid - lo : centroid > reach ? centroid - reach : 0;
+    // The tolerance already allows for where a picked maximum falls inside a narrow multiplet, so
+    // the error stays (centroid − middle) while the band's half width H is within it (high field);
+    // only a wider band (low field) has its error measured in units of H: · tol / max(tol, H).
+    const halfWidth = (reach - lo) / 2;
+    const scaled = ((centroid - (lo + reach) / 2) * tol) / Math.max(tol, halfWidth);
     let nuclei = 0;
     for (const m of band) nuclei += multiplets[m].nuclei ?? 1;
     for (const m of band) {
@@ -255,7 +262,7 @@ function unresolvedBands(
       out[m] =
         peaks.length === 0
           ? { peaks: [], linePpm: [], linesMatched: 0, linesExpected: 1, deltaPpm: 0, intensity: 0, scoreDeltaPpm: 0 }
-          : { peaks: [...peaks], linePpm: peaks.map(() => c), linesMatched: 1, linesExpected: 1, deltaPpm: centroid - c, intensity: (sumI * (multiplets[m].nuclei ?? 1)) / nuclei, scoreDeltaPpm: beyond };
+          : { peaks: [...peaks], linePpm: peaks.map(() => c), linesMatched: 1, linesExpected: 1, deltaPpm: centroid - c, intensity: (sumI * (multiplets[m].nuclei ?? 1)) / nuclei, scoreDeltaPpm: scaled };
     }
     b0 = b1;
   }

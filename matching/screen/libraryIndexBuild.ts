@@ -38,7 +38,7 @@ export interface LibraryIndex {
   binStart: Int32Array;
   binSignals: Int32Array;
   /** Scratch for a screening run (the index is reused across runs; runs are not concurrent in JS). */
-  scratch: { stamp: Int32Array; run: number; hitRequired: Float64Array; hitExchangeable: Float64Array };
+  scratch: { stamp: Int32Array; run: number; hitRequired: Float64Array; hitExchangeable: Float64Array; stats: { touched: number; survived: number } };
 }
 
 export interface LibraryIndexOptions {
@@ -150,6 +150,6 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     binOrigin,
     binStart,
     binSignals,
-    scratch: { stamp: new Int32Array(S), run: 0, hitRequired: new Float64Array(kept.length), hitExchangeable: new Float64Array(kept.length) },
+    scratch: { stamp: new Int32Array(S), run: 0, hitRequired: new Float64Array(kept.length), hitExchangeable: new Float64Array(kept.length), stats: { touched: 0, survived: 0 } },
   };
 }

@@ -11,5 +11,8 @@ export function libraryIndexEntryMatch(index: LibraryIndex, e: number, shifts: F
   const s0 = index.sigStart[e];
   const s1 = index.sigStart[e + 1];
   const multiplets: MultipletLines[] = index.sigLines.slice(s0, s1);
-  return multipletsMatchPeaks(multiplets, shifts, intensities, tol, index.mhz).map((m, i) => ({ signal: s0 + i, ...m }));
+  const out = multipletsMatchPeaks(multiplets, shifts, intensities, tol, index.mhz) as SignalMatch[];
+  // Tag in place (no copies): this runs for every entry that survives the prune.
+  for (let i = 0; i < out.length; i++) out[i].signal = s0 + i;
+  return out;
 }

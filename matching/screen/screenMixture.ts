@@ -30,24 +30,29 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
   // Light records while scoring; only the reported best get their evidence built.
   const scored: Array<{ e: number; matches: SignalMatch[]; score: EntryScore }> = [];
   const { hitRequired, hitExchangeable } = index.scratch;
-  // Upper bound of E per touched entry (hidden signals counted as found); score ≤ E². The scratch
-  // is cleared before any matching so an error below cannot leave it dirty for the next run.
-  const bounds = touched.map((e) => (hitRequired[e] + hitExchangeable[e]) / (index.entryRequired[e] + hitExchangeable[e]));
+  // Upper bound of E per touched entry (hidden signals counted as found); score ≤ E². Survivors are
+  // picked, and the scratch cleared, before any matching, so an error below cannot leave it dirty.
+  const survivors: number[] = [];
   for (const e of touched) {
+    const bound = (hitRequired[e] + hitExchangeable[e]) / (index.entryRequired[e] + hitExchangeable[e]);
     hitRequired[e] = 0;
     hitExchangeable[e] = 0;
+    if (bound * bound >= minScore - 1e-12) survivors.push(e);
   }
-  for (let t = 0; t < touched.length; t++) {
-    const e = touched[t];
-    if (bounds[t] * bounds[t] < minScore - 1e-12) continue;
+  index.scratch.stats = { touched: touched.length, survived: survivors.length };
+  for (const e of survivors) {
     const matches = libraryIndexEntryMatch(index, e, shifts, intensities, tol);
-    const summaries: SignalMatchSummary[] = matches.map((m) => ({
-      nuclei: index.sigNuclei[m.signal],
-      exchangeable: index.sigExchangeable[m.signal] === 1 || shiftInRegions(index.sigShift[m.signal], set.regions),
-      matched: m.linesMatched > 0,
-      deltaPpm: m.scoreDeltaPpm,
-      intensity: m.intensity,
-    }));
+    const summaries: SignalMatchSummary[] = new Array(matches.length);
+    for (let i = 0; i < matches.length; i++) {
+      const m = matches[i];
+      summaries[i] = {
+        nuclei: index.sigNuclei[m.signal],
+        exchangeable: index.sigExchangeable[m.signal] === 1 || shiftInRegions(index.sigShift[m.signal], set.regions),
+        matched: m.linesMatched > 0,
+        deltaPpm: m.scoreDeltaPpm,
+        intensity: m.intensity,
+      };
+    }
     const score = entryScore(summaries, { tolerancePpm: tol });
     if (score.score > 0 && score.score >= minScore) scored.push({ e, matches, score });
   }

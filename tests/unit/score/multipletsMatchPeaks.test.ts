@@ -25,14 +25,16 @@ describe('multipletsMatchPeaks: unresolved multiplets', () => {
     const low = at(80);
     expect(low.peaks).toEqual([0]);
     expect(low.deltaPpm).toBeCloseTo(0.1, 9);
-    // inside the extent: the maximum of an unresolved hump can be anywhere in it
-    expect(low.scoreDeltaPpm).toBe(0);
+    // wider than the tolerance: scored in units of the extent, 0.1 · 0.03 / 0.125
+    expect(low.scoreDeltaPpm).toBeCloseTo((0.1 * 0.03) / 0.125, 9);
     expect(at(600).linesMatched).toBe(0);
   });
 
-  it('measures the score error beyond the edge of the extent', () => {
-    const r = multipletsMatchPeaks([signalToMultipletLines(m(1.48), 80)], [1.63], [1], 0.03, 80)[0];
-    expect(r.scoreDeltaPpm).toBeCloseTo(0.025, 9);
+  it('keeps the plain error at high field, where the extent lies inside the tolerance', () => {
+    // 10 Hz at 400 MHz = 0.025 ppm < 0.03 ppm
+    const r = multipletsMatchPeaks([signalToMultipletLines(m(1.34, 6), 400)], [1.359], [1], 0.03, 400)[0];
+    expect(r.scoreDeltaPpm).toBeCloseTo(0.019, 9);
+    expect(r.deltaPpm).toBeCloseTo(0.019, 9);
   });
 
   it('takes the peak nearest its centre, not every peak of its window', () => {
