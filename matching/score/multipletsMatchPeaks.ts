@@ -114,15 +114,23 @@ export function multipletsMatchPeaks(
     let bestCover = -1;
     let bestMisfit = Infinity;
     let bestOffset = 0;
+    // Lines ascend, so the peaks within tol of line l start at a pointer that only moves forward,
+    // and for one offset the targets L[k] + offset ascend too: nearest peaks by a moving pointer
+    // (same choice as nearest(), ties to the lower peak) instead of a binary search each.
+    let pStart = from;
     for (let l = 0; l < n; l++) {
-      for (let p = from; p < to; p++) {
+      while (pStart < to && shifts[pStart] - L[l] < -tol) pStart++;
+      for (let p = pStart; p < to; p++) {
         const offset = shifts[p] - L[l];
-        if (offset > tol || offset < -tol) continue;
+        if (offset > tol) break;
+        if (offset < -tol) continue;
         let cover = 0;
         let misfit = 0;
+        let ptr = from;
         for (let k = 0; k < n; k++) {
           const target = L[k] + offset;
-          const q = nearest(shifts, from, to, target);
+          while (ptr < to && shifts[ptr] < target) ptr++;
+          const q = ptr === to ? to - 1 : ptr === from ? from : target - shifts[ptr - 1] <= shifts[ptr] - target ? ptr - 1 : ptr;
           const d = Math.abs(shifts[q] - target);
           if (d <= lineTol && Math.abs(shifts[q] - L[k]) <= tol) {
             cover += W[k];
