@@ -1,4 +1,4 @@
-// Converts library-data/sources/solvent-impurities-1h.tsv (our transcription of Gottlieb, Kotlyar &
+// Converts library-data/sources/solvent-impurities-1h.tsv (our copy of Gottlieb, Kotlyar &
 // Nudelman, J. Org. Chem. 1997, 62, 7512, Table 1, and Fulmer et al., Organometallics 2010, 29,
 // 2176, Table 1) into library-data/contaminants.json: one entry per compound per solvent, category
 // "contaminant". Run: node scripts/runTs.mjs scripts/buildContaminants.ts [--check]
@@ -246,7 +246,7 @@ function entryFrom(compound: Compound, solvent: Solvent, built: BuiltSignal[], i
     category: 'contaminant',
     source:
       sources.map((s) => CITATION[s]).join('; ') +
-      ' (transcribed in library-data/sources/solvent-impurities-1h.tsv)' +
+      ' (copied in library-data/sources/solvent-impurities-1h.tsv)' +
       (recalled ? '; value recalled (memory), not checked against the printed table' : ''),
     solvent,
     mhz: 300,
@@ -297,7 +297,7 @@ export function buildContaminants(text: string): LibraryFile {
           if (agreeing.length > 0) {
             const entry = entries.find((e) => e.id === `contaminant:${compound.slug}:${solvent}`)!;
             const extra = [...new Set(agreeing.flatMap((v) => v.source.split(';').map((s) => s.trim())))].map((s) => CITATION[s]).filter((c) => !entry.source.includes(c));
-            if (extra.length > 0) entry.source = entry.source.replace(' (transcribed in', `; ${extra.join('; ')} (transcribed in`);
+            if (extra.length > 0) entry.source = entry.source.replace(' (copied in', `; ${extra.join('; ')} (copied in`);
           }
         }
       }

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { LibraryFileSchema, type LibraryEntry } from '../../../shared/libraryEntry';
 import { buildContaminants } from '../../../scripts/buildContaminants';
 
-// The oracle is the published tables themselves, through our transcription (one row per group,
+// The oracle is the published tables themselves, through our copy (one row per group,
 // with its paper): H. E. Gottlieb, V. Kotlyar, A. Nudelman, J. Org. Chem. 1997, 62, 7512, Table 1;
 // G. R. Fulmer et al., Organometallics 2010, 29, 2176, Table 1.
 const ROOT = path.join(__dirname, '../../..');
