@@ -56,7 +56,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
   const binWidth = options.binWidthPpm ?? (nucleus === '13C' ? 0.1 : 0.01);
   if (!(binWidth > 0)) throw new RangeError(`binWidthPpm must be positive, got ${binWidth}`);
   const kept: LibraryEntry[] = [];
-  const sigs: Array<{ e: number; src: number; n: number; x: boolean; shift: number; ppm: ArrayLike<number>; w: ArrayLike<number>; h: number }> = [];
+  const sigs: Array<{ e: number; src: number; n: number; x: boolean; shift: number; ppm: ArrayLike<number>; w: ArrayLike<number>; h: number; lines: MultipletLines }> = [];
   const sigStartList: number[] = [];
   for (const entry of entries) {
     if (entry.retired && !options.includeRetired) continue;
@@ -69,7 +69,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     for (const [s, i] of mine) {
       // Line positions and binomial weights from the multiplet simulation (first order).
       const lines = signalToMultipletLines(s, mhz);
-      sigs.push({ e, src: i, n: s.nuclei, x: s.nucleus === '1H' && s.exchangeable === true, shift: s.shift, ppm: lines.ppm, w: lines.weight, h: lines.halfExtentPpm ?? 0 });
+      sigs.push({ e, src: i, n: s.nuclei, x: s.nucleus === '1H' && s.exchangeable === true, shift: s.shift, ppm: lines.ppm, w: lines.weight, h: lines.halfExtentPpm ?? 0, lines });
     }
   }
   sigStartList.push(sigs.length);
@@ -107,7 +107,8 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     maxShift = Math.max(maxShift, sigHi[k]);
   });
   lineStart[S] = l;
-  const sigLines: MultipletLines[] = sigs.map((s, k) => ({ centre: s.shift, ppm: linePpm.subarray(lineStart[k], lineStart[k + 1]), weight: lineWeight.subarray(lineStart[k], lineStart[k + 1]), nuclei: s.n, ...(s.h > 0 ? { halfExtentPpm: s.h } : {}) }));
+  // The matcher's view of each signal is the simulation itself (no subarray views: 50k of them cost more than the copy).
+  const sigLines: MultipletLines[] = sigs.map((s) => s.lines);
   for (let e = 0; e < kept.length; e++) {
     let req = 0;
     let all = 0;
