@@ -9,21 +9,24 @@ import type { LibraryEntry } from '../../../shared/libraryEntry';
 import type { Mixture } from '../../../shared/mixture';
 import type { ScreenOptions, ScreenResult } from '../../../shared/screening';
 
-/** Peak indices [from, to) within reach (tolerance, plus half extent) of some line, by comparing every line with every peak. */
+/**
+ * Peak indices [from, to) of the multiplet's window (its lines ± tolerance, plus half extent), by
+ * comparing every line with every peak: from = the first peak at or above some line − reach, to =
+ * one past the last peak at or below some line + reach.
+ */
 function scanAll(mult: MultipletLines, shifts: Float64Array, tol: number): [number, number] {
-  const reach = tol + (mult.ppm.length === 1 ? (mult.halfExtentPpm ?? 0) : 0);
-  let from = -1;
-  let to = -1;
+  const h = mult.ppm.length === 1 ? (mult.halfExtentPpm ?? 0) : 0;
+  let from = shifts.length;
+  let to = 0;
   for (let l = 0; l < mult.ppm.length; l++) {
     const x = mult.ppm[l];
     for (let p = 0; p < shifts.length; p++) {
-      if (Math.abs(shifts[p] - x) <= reach) {
-        if (from < 0 || p < from) from = p;
-        if (p + 1 > to) to = p + 1;
-      }
+      // same arithmetic as multipletsMatchPeaks' window, so both agree to the last bit
+      if (shifts[p] >= x - tol - h && p < from) from = p;
+      if (shifts[p] <= x + tol + h && p + 1 > to) to = p + 1;
     }
   }
-  return from < 0 ? [0, 0] : [from, to];
+  return from < to ? [from, to] : [0, 0];
 }
 
 export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], options: ScreenOptions = {}): ScreenResult {
