@@ -34,8 +34,10 @@ export const FitComponentSchema = z.object({
   uniqueness: finite.min(0).max(1).describe('share of its contribution no other candidate can take over'),
   coverage: finite.min(0).max(1).describe('nuclei-weighted share of its signals the mixture supports'),
   resolvedLines: finite.nonnegative().describe('supported lines separated by at least one linewidth'),
+  distinctLines: finite.nonnegative().optional().describe('resolved lines that are also at least one linewidth from every line of the other fitted candidates: evidence no other candidate shares'),
   snr: finite.nonnegative().nullable().describe('height of its tallest fitted line / RMS noise; null when the noise is unknown'),
   belowQuantitationLimit: z.boolean().describe('true when snr < 10 (ICH Q2(R1) quantitation limit, common practice)'),
+  identifiable: z.boolean().optional().describe('false when the compound is in an AnalysisReport.indistinguishable set: this data fixes only the set’s combined amount, not this compound’s own; absent from a bare fit'),
   curve: z.array(finite).describe('contribution on FitResult.axis'),
 });
 export type FitComponent = z.infer<typeof FitComponentSchema>;
@@ -105,6 +107,8 @@ export const AmountResultSchema = z.object({
   snr: finite.nonnegative().nullable(),
   belowQuantitationLimit: z.boolean(),
   isStandard: z.boolean(),
+  identifiable: z.boolean().optional().describe('false when the compound is in an AnalysisReport.indistinguishable set: its own moleFraction and concentration are how the fit happened to split the set’s amount, not a measurement; read the set’s combined amount instead'),
+  indistinguishableSet: z.string().optional().describe('id of the AnalysisReport.indistinguishable set it belongs to'),
 });
 export type AmountResult = z.infer<typeof AmountResultSchema>;
 
@@ -114,6 +118,24 @@ export const QValueSchema = z.object({
   qValue: finite.min(0).max(1),
 });
 export type QValue = z.infer<typeof QValueSchema>;
+
+/**
+ * Fitted compounds this data cannot tell apart (library near duplicates, or members of one
+ * screening ambiguity group, at least one of them without two resolved lines of its own): only
+ * their combined amount is determined.
+ */
+export const IndistinguishableSetSchema = z.object({
+  id: z.string().describe('S1, S2, … in order of the set’s largest member'),
+  members: z.array(z.string()).min(2).describe('entry ids, largest amount first'),
+  message: z.string().describe('plain-language statement for the report'),
+  amountPerNucleus: finite.nonnegative().describe('sum of the members’ fitted amounts per nucleus'),
+  amountUncertainty: finite.nonnegative().nullable().describe('members’ uncertainties added in quadrature (their correlation, negative for look-alikes, is neglected, so this errs on the large side)'),
+  moleFraction: finite.min(0).max(1).describe('sum of the members’ mole fractions'),
+  moleFractionUncertainty: finite.nonnegative().nullable(),
+  concentrationMM: finite.nonnegative().nullable().describe('sum of the members’ qNMR concentrations; null without a standard'),
+  concentrationUncertaintyMM: finite.nonnegative().nullable(),
+});
+export type IndistinguishableSet = z.infer<typeof IndistinguishableSetSchema>;
 
 export const AnalysisOptionsSchema = z.object({
   screen: ScreenOptionsSchema.optional(),
@@ -136,6 +158,7 @@ export const AnalysisReportSchema = z.object({
   qValues: z.array(QValueSchema),
   decoySets: z.number().int().positive(),
   warnings: z.array(z.string()),
+  indistinguishable: z.array(IndistinguishableSetSchema).optional().describe('sets of fitted compounds this data cannot tell apart, with their combined amounts'),
   caution: z.string(),
 });
 export type AnalysisReport = z.infer<typeof AnalysisReportSchema>;

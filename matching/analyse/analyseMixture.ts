@@ -1,4 +1,4 @@
-import { AnalysisOptionsSchema, type AnalysisOptions, type AnalysisReport, type FitComponent } from '../../shared/analysis';
+import { AnalysisOptionsSchema, type AnalysisOptions, type AnalysisReport, type FitComponent, type IndistinguishableSet } from '../../shared/analysis';
 import { CAUTION_TEXT } from '../../shared/caution';
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Mixture } from '../../shared/mixture';
@@ -6,9 +6,11 @@ import { componentEvidenceScore } from '../confidence/componentEvidenceScore';
 import { libraryToDecoys } from '../confidence/libraryToDecoys';
 import { scoresToQValues } from '../confidence/scoresToQValues';
 import { fitMixture } from '../fit/fitMixture';
+import { amountsCombineSet } from '../quant/amountsCombineSet';
 import { fitToAmounts } from '../quant/fitToAmounts';
 import { fitToPurity } from '../quant/fitToPurity';
 import { screenMixture } from '../screen/screenMixture';
+import { componentsFindIndistinguishable } from './componentsFindIndistinguishable';
 
 /** Shift range of the mixture, ppm: the spectrum axis, or the peaks' span widened by the window. */
 function mixtureRange(mixture: Mixture, tolerance: number): [number, number] {
@@ -44,7 +46,9 @@ const score = (c: FitComponent) => componentEvidenceScore(c);
  * seeded by options.seed, default 1) are screened and fitted exactly like the library, with the
  * linewidth the target fit found; every entry that is not fitted scores 0. Only entries of the
  * mixture's solvent are used unless options.anySolvent; shift-reference entries (category
- * "reference") stay out of the mole fractions.
+ * "reference") stay out of the mole fractions. Fitted look-alikes (library near duplicates, or one
+ * screening ambiguity group) that the data does not tell apart are reported as one set with a
+ * combined amount; their members are flagged not identifiable and scored on their own lines only.
  */
 export function analyseMixture(mixture: Mixture, library: LibraryEntry[], options: AnalysisOptions = {}): AnalysisReport {
   const parsed = AnalysisOptionsSchema.safeParse(options);
@@ -78,17 +82,33 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
     }
   }
   if (fit.linewidthSource === 'default') warnings.push(`linewidth unknown: ${fit.linewidthHz} Hz assumed`);
+  // Look-alikes: library near duplicates and screening ambiguity groups, among the fitted.
   const fittedIds = new Set(fit.components.map((c) => c.entryId));
-  const pairs = new Set<string>();
-  for (const e of library) {
-    if (!fittedIds.has(e.id)) continue;
-    for (const other of e.nearDuplicateOf ?? []) if (fittedIds.has(other)) pairs.add([e.id, other].sort().join(' and '));
+  const related: string[][] = screen.ambiguityGroups.map((g) => g.members);
+  for (const e of library) if (fittedIds.has(e.id)) for (const other of e.nearDuplicateOf ?? []) related.push([e.id, other]);
+  const relatedSets = componentsFindIndistinguishable(fit.components, related);
+  const blurred = relatedSets.filter((r) => !r.identifiable);
+  const setOf = new Map<string, string>();
+  blurred.forEach((r, k) => r.members.forEach((id) => setOf.set(id, `S${k + 1}`)));
+  const nameOf = new Map(fit.components.map((c) => [c.entryId, c.name]));
+  const names = (ids: string[]) => ids.map((id) => nameOf.get(id) ?? id).join(', ');
+  for (const r of relatedSets.filter((x) => x.identifiable)) {
+    warnings.push(`${names(r.members)} look alike (library near duplicates or one screening ambiguity group); the fit told them apart by at least two resolved lines of each that no other fitted compound shares`);
   }
-  for (const p of pairs) warnings.push(`${p} are near-duplicates in the library: how the fit splits intensity between them is uncertain`);
   if (fit.unexplainedPeaks.length > 0) warnings.push(`${fit.unexplainedPeaks.length} mixture peak(s) not explained by any fitted compound`);
   for (const g of screen.ambiguityGroups) warnings.push(`screening could not tell apart: ${g.members.join(', ')}`);
   const references = library.filter((e) => e.category === 'reference' && e.id !== standard?.entryId).map((e) => e.id);
-  const amounts = fitToAmounts(fit, standard, { excludeFromFractions: references });
+  const amounts = fitToAmounts(fit, standard, { excludeFromFractions: references }).map((a) =>
+    setOf.has(a.entryId) ? { ...a, identifiable: false, indistinguishableSet: setOf.get(a.entryId)! } : { ...a, identifiable: true },
+  );
+  fit.components = fit.components.map((c) => ({ ...c, identifiable: !setOf.has(c.entryId) }));
+  const indistinguishable: IndistinguishableSet[] = blurred.map((r, k) => {
+    const message =
+      `${names(r.members)} cannot be told apart by this data: ${names(r.lacking)} ${r.lacking.length > 1 ? 'show' : 'shows'} fewer than two resolved lines that no other fitted compound shares. ` +
+      'Their combined amount is reported; how the fit splits it between them is not a measurement.';
+    warnings.push(message);
+    return { id: `S${k + 1}`, members: r.members, message, ...amountsCombineSet(r.members, fit.components, amounts) };
+  });
   if (opts.purity && !standard) throw new RangeError('a purity assay needs an internal standard (options.standard)');
   const purity = opts.purity && standard ? fitToPurity(fit, standard, opts.purity, library) : null;
 
@@ -101,7 +121,11 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
     const scored = new Map(run.fit.components.map((c) => [c.entryId, score(c)]));
     for (const d of decoys) decoyScores.push(scored.get(d.id) ?? 0);
   }
-  const fitted = new Map(fit.components.map((c) => [c.entryId, score(c)]));
+  // A member of an indistinguishable set is scored on the lines no other fitted compound shares:
+  // support it has only through its look-alike's (or anyone's) signals earns it no confidence.
+  const fitted = new Map(
+    fit.components.map((c) => [c.entryId, score(setOf.has(c.entryId) ? { ...c, resolvedLines: Math.min(c.resolvedLines, c.distinctLines ?? c.resolvedLines) } : c)]),
+  );
   const q = scoresToQValues(library.map((e) => ({ id: e.id, score: fitted.get(e.id) ?? 0 })), decoyScores, sets);
   const qValues = fit.components.map((c) => ({ entryId: c.entryId, score: fitted.get(c.entryId)!, qValue: q.get(c.entryId)! }));
 
@@ -115,6 +139,7 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
     qValues,
     decoySets: sets,
     warnings,
+    indistinguishable,
     caution: CAUTION_TEXT,
   };
 }

@@ -1,1 +1,2 @@
 export * from './analyseMixture';
+export * from './componentsFindIndistinguishable';

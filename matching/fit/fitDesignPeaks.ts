@@ -35,16 +35,19 @@ export function fitDesignPeaks(peaks: FitLine[], span: [number, number], toleran
   const n = Math.max(2, Math.floor((hi - lo) / step) + 1);
   const axis = new Float64Array(n);
   for (let i = 0; i < n; i++) axis[i] = lo + i * step;
-  const curve = (lines: FitLine[]): Float64Array => {
-    const out = new Float64Array(n);
+  const addCurve = (lines: FitLine[], scale: number, out: Float64Array): void => {
     // Display curves only: tails below 1e-6 of a line's height are left out.
     for (const l of lines) {
-      const height = l.a * lorentzianUnitArea(0, l.w);
+      const height = scale * l.a * lorentzianUnitArea(0, l.w);
       const r = lorentzianReach(l.w, 1e-6);
       const i0 = Math.max(0, Math.floor((l.x - r - lo) / step));
       const i1 = Math.min(n, Math.ceil((l.x + r - lo) / step) + 1);
       for (let i = i0; i < i1; i++) out[i] += height * lorentzianFct(axis[i] - l.x, l.w);
     }
+  };
+  const curve = (lines: FitLine[]): Float64Array => {
+    const out = new Float64Array(n);
+    addCurve(lines, 1, out);
     return out;
   };
   const near = (x: number, reach: number, list: FitLine[]): FitLine[] => list.filter((p) => Math.abs(p.x - x) <= reach);
@@ -61,6 +64,7 @@ export function fitDesignPeaks(peaks: FitLine[], span: [number, number], toleran
     dotLY: (A) => lineSum(A, sorted),
     modelIntensity: (lines) => lines.reduce((s, l) => s + l.a, 0),
     curve,
+    addCurve,
     mixtureAt: (x) => {
       let v = 0;
       for (const p of sorted) v += p.a * lorentzianUnitArea(x - p.x, p.w);

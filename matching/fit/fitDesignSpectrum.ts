@@ -110,6 +110,15 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
     for (const s of column(lines)) out.set(s.values, s.start);
     return out;
   };
+  const addCurve = (lines: FitLine[], scale: number, target: Float64Array): void => {
+    for (const s of column(lines)) {
+      const v = s.values;
+      const o = s.start;
+      for (let i = 0; i < v.length; i++) target[o + i] += scale * v[i];
+    }
+  };
+  // Asked for the same lines on every rejection pass: one sum per column.
+  const intensityCache = new WeakMap<FitLine[], number>();
   return {
     kind: 'spectrum',
     yy,
@@ -131,11 +140,15 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
       return s;
     },
     modelIntensity: (lines) => {
+      const hit = intensityCache.get(lines);
+      if (hit !== undefined) return hit;
       let s = 0;
       for (const seg of column(lines)) for (let i = 0; i < seg.values.length; i++) s += seg.values[i];
+      intensityCache.set(lines, s);
       return s;
     },
     curve,
+    addCurve,
     mixtureAt: (x) => {
       const i = lowerBound(axis, x);
       if (i <= 0) return y[0];

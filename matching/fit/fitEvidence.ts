@@ -5,6 +5,7 @@ export interface Evidence {
   uniqueness: number;
   coverage: number;
   resolvedLines: number;
+  distinctLines: number;
 }
 
 /**
@@ -13,7 +14,9 @@ export interface Evidence {
  * other candidates' lines already explain it. coverage = nuclei-weighted share of its signals that
  * the mixture (minus the other candidates) supports, each clipped to [0, 1]. resolvedLines counts
  * the lines individually supported (mixture minus others ≥ half the model at the line centre) that lie at least
- * one linewidth apart: one singlet is one line of evidence.
+ * one linewidth apart: one singlet is one line of evidence. distinctLines counts those of them
+ * that are also at least one linewidth from every line of the other fitted candidates. On a grid design, `rest` may hold the
+ * mixture minus the other candidates' fitted curves, which makes coverage one pass per signal.
  */
 export function fitEvidence(
   design: FitDesign,
@@ -23,12 +26,11 @@ export function fitEvidence(
   lines: FitLine[][],
   signals: FitLine[][][],
   j: number,
-  fitted?: Float64Array,
   rough: FitDesign = design,
-  ownCurve?: Float64Array,
+  rest?: Float64Array,
 ): Evidence {
   const n = c.length;
-  if (!(c[j] > 0)) return { uniqueness: 0, coverage: 0, resolvedLines: 0 };
+  if (!(c[j] > 0)) return { uniqueness: 0, coverage: 0, resolvedLines: 0, distinctLines: 0 };
   const sse = (x: ArrayLike<number>, idx: number[]) => {
     let s = design.yy;
     idx.forEach((p, a) => {
@@ -51,12 +53,8 @@ export function fitEvidence(
   let covered = 0;
   let weight = 0;
   const supported: FitLine[] = [];
-  // On a grid, the mixture minus the other candidates is one vector: one pass per signal.
-  let rest: Float64Array | null = null;
-  if (rough.dotLV && fitted && ownCurve) {
-    rest = design.mixtureCurve.slice();
-    for (let i = 0; i < rest.length; i++) rest[i] -= fitted[i] - ownCurve[i];
-  }
+  // On a grid, `rest` (the mixture minus the other candidates) is one vector: one pass per signal.
+  if (!rough.dotLV) rest = undefined;
   for (const sig of signals[j]) {
     const nuclei = sig.reduce((s, l) => s + l.a, 0);
     let cross: number;
@@ -80,14 +78,27 @@ export function fitEvidence(
       if (own > 0 && here >= 0.5 * own) supported.push(line);
     }
   }
-  supported.sort((p, q) => p.x - q.x);
-  let resolved = 0;
-  let last = -Infinity;
-  for (const l of supported) {
-    if (l.x - last >= l.w) {
-      resolved++;
-      last = l.x;
+  const resolvedAmong = (set: FitLine[]) => {
+    set.sort((p, q) => p.x - q.x);
+    let count = 0;
+    let last = -Infinity;
+    for (const l of set) {
+      if (l.x - last >= l.w) {
+        count++;
+        last = l.x;
+      }
     }
-  }
-  return { uniqueness, coverage: weight > 0 ? covered / weight : 0, resolvedLines: resolved };
+    return count;
+  };
+  // A supported line closer than one linewidth to a line of another fitted candidate is shared
+  // evidence: two Lorentzians nearer than their FWHM are not resolved (common practice), so the
+  // mixture cannot say whose line it is.
+  const distinct = supported.filter((line) => {
+    for (let k = 0; k < n; k++) {
+      if (k === j || !(c[k] > 0)) continue;
+      for (const o of lines[k]) if (Math.abs(o.x - line.x) < Math.max(o.w, line.w)) return false;
+    }
+    return true;
+  });
+  return { uniqueness, coverage: weight > 0 ? covered / weight : 0, resolvedLines: resolvedAmong(supported), distinctLines: resolvedAmong(distinct) };
 }

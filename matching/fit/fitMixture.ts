@@ -51,11 +51,6 @@ function prepareSpectrum(ppm: number[], intensity: number[]): Prepared {
   return { axis, y, reversed };
 }
 
-function maybeReverse(a: Float64Array, reversed: boolean): number[] {
-  const out = toPlainArray(a);
-  return reversed ? out.reverse() : out;
-}
-
 /**
  * Confirms candidates by fitting the mixture as a non-negative combination of their simulated
  * Lorentzian spectra (NNLS, Lawson & Hanson 1974), each candidate shifted by one common offset
@@ -262,14 +257,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
 
   const n = design.axis.length;
   const fitted = new Float64Array(n);
-  const curves = active.map((i, a) => {
-    const curve = design.curve(current[i]);
-    for (let p = 0; p < n; p++) {
-      curve[p] *= c[a];
-      fitted[p] += curve[p];
-    }
-    return curve;
-  });
+  for (let a = 0; a < active.length; a++) design.addCurve(current[active[a]], c[a], fitted);
   const residual = new Float64Array(n);
   let sseGrid = 0;
   for (let p = 0; p < n; p++) {
@@ -300,9 +288,19 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   const totalExplained = Math.max(design.totalIntensity, active.reduce((sum, i, a) => sum + c[a] * design.modelIntensity(current[i]), 0));
   const allSignals = signalsOf(current);
   const activeSignals = active.map((i) => allSignals[i]);
+  const activeLines = active.map((k) => current[k]);
+  const reversed = prepared?.reversed ?? false;
+  // One scratch curve and one scratch "mixture minus the others" for all components: only the
+  // points where a component's lines are not negligible are written, and each curve becomes a
+  // plain array (the JSON shape) in a single indexed pass.
+  const own = new Float64Array(n);
+  const rest = mixture.kind === 'spectrum' ? new Float64Array(n) : null;
   const components: FitComponent[] = active.map((i, a) => {
     const { entry, nuclei } = kept[i];
-    const ev = fitEvidence(design, G, h, c, active.map((k) => current[k]), activeSignals, a, fitted, rough(), curves[a]);
+    own.fill(0);
+    design.addCurve(current[i], c[a], own);
+    if (rest) for (let p = 0; p < n; p++) rest[p] = residual[p] + own[p];
+    const ev = fitEvidence(design, G, h, c, activeLines, activeSignals, a, rough(), rest ?? undefined);
     const ratio = noise !== null && noise > 0 ? (c[a] * tallest(current[i])) / noise : null;
     // A noise level so small that the ratio overflows means "noise unknown" for the report.
     const snr = ratio !== null && Number.isFinite(ratio) ? ratio : null;
@@ -319,9 +317,10 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
       uniqueness: ev.uniqueness,
       coverage: ev.coverage,
       resolvedLines: ev.resolvedLines,
+      distinctLines: ev.distinctLines,
       snr,
       belowQuantitationLimit: snr !== null && snr < QUANTITATION_SNR,
-      curve: !withCurves ? [] : prepared ? maybeReverse(curves[a], prepared.reversed) : toPlainArray(curves[a]),
+      curve: withCurves ? toPlainArray(own, reversed) : [],
     };
   });
 
@@ -331,7 +330,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     apartPpm: (2 * linewidthHz) / freq,
   });
 
-  const out = (a: Float64Array) => (!withCurves ? [] : prepared ? maybeReverse(a, prepared.reversed) : toPlainArray(a));
+  const out = (v: Float64Array) => (withCurves ? toPlainArray(v, reversed) : []);
   return {
     kind: mixture.kind,
     linewidthHz,

@@ -22,6 +22,8 @@ export interface FitDesign {
   dotLV?(A: FitLine[], v: Float64Array): number;
   /** Model curve of `lines` on the axis. */
   curve(lines: FitLine[]): Float64Array;
+  /** target += scale × model curve of `lines`, touching only the points where the model is not negligible. */
+  addCurve(lines: FitLine[], scale: number, target: Float64Array): void;
   /** ppm axis (ascending) and the mixture on it. */
   axis: Float64Array;
   mixtureCurve: Float64Array;
@@ -47,9 +49,15 @@ export function linesAt(lines: FitLine[], x: number): number {
   return v;
 }
 
-/** Copies a typed array into a plain array (JSON output) faster than Array.from. */
-export function toPlainArray(a: Float64Array): number[] {
-  const out = new Array<number>(a.length).fill(0); // packed from the start: faster to fill
-  for (let i = 0; i < a.length; i++) out[i] = a[i];
+/**
+ * Copies a typed array into a plain array (JSON output), in reverse order when `reversed`:
+ * one indexed pass, where Array.from goes through the iterator and a later reverse() is a
+ * second pass.
+ */
+export function toPlainArray(a: Float64Array, reversed = false): number[] {
+  const n = a.length;
+  const out = new Array<number>(n).fill(0); // packed from the start: faster to fill
+  if (reversed) for (let i = 0; i < n; i++) out[i] = a[n - 1 - i];
+  else for (let i = 0; i < n; i++) out[i] = a[i];
   return out;
 }

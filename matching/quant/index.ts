@@ -3,3 +3,4 @@ export * from './qnmrPurity';
 export * from './formulaMolarMass';
 export * from './fitToAmounts';
 export * from './fitToPurity';
+export * from './amountsCombineSet';

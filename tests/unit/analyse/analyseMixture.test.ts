@@ -88,7 +88,41 @@ describe('analyseMixture', () => {
     const twin: LibraryEntry = { ...e, id: 'ethanol-twin', name: 'ethanol twin', nearDuplicateOf: ['ethanol'], signals: e.signals.map((sg) => ({ ...sg, shift: sg.shift > 2 ? 3.6 : 1.31 })) };
     const r = analyseMixture(synthPeaks([...parts, { entry: twin, amount: 0.7 }]), [...lib, twin], { decoySets: 2 });
     expect(r.fit.components.map((c) => c.entryId)).toEqual(expect.arrayContaining(['ethanol', 'ethanol-twin']));
-    expect(r.warnings).toContain('ethanol and ethanol-twin are near-duplicates in the library: how the fit splits intensity between them is uncertain');
+    // Every line of each is resolved from the other's at 600 MHz: the data tells them apart.
+    expect(r.warnings).toContain('ethanol, ethanol twin look alike (library near duplicates or one screening ambiguity group); the fit told them apart by at least two resolved lines of each that no other fitted compound shares');
+    expect(r.indistinguishable).toEqual([]);
+    for (const id of ['ethanol', 'ethanol-twin']) expect(r.amounts.find((a) => a.entryId === id)!.identifiable, id).toBe(true);
+  }, T);
+
+  it('reports look-alikes the data cannot tell apart as one set with their combined amount, each not identifiable', () => {
+    // The twin is ethanol's quartet and triplet on the same shifts plus one singlet of its own:
+    // its only evidence of its own is one line, which any unrelated peak could give, and every
+    // line of ethanol is one of the twin's too.
+    const e = get('ethanol');
+    const twin: LibraryEntry = { ...e, id: 'ethanol-twin', name: 'ethanol twin', nearDuplicateOf: ['ethanol'], signals: [...e.signals, { nucleus: '1H', shift: 6.4, multiplicity: 's', j: [], nuclei: 1 }] };
+    const r = analyseMixture(synthPeaks([...parts, { entry: twin, amount: 0.5 }]), [...lib, twin], { decoySets: 4 });
+    expect(AnalysisReportSchema.safeParse(JSON.parse(JSON.stringify(r))).success).toBe(true);
+    const fitted = new Map(r.fit.components.map((c) => [c.entryId, c]));
+    expect([...fitted.keys()]).toEqual(expect.arrayContaining(['ethanol', 'ethanol-twin']));
+    expect(r.indistinguishable).toHaveLength(1);
+    const set = r.indistinguishable![0];
+    expect(set.id).toBe('S1');
+    expect(set.members).toEqual(['ethanol', 'ethanol-twin']);
+    expect(set.message).toBe('ethanol, ethanol twin cannot be told apart by this data: ethanol, ethanol twin show fewer than two resolved lines that no other fitted compound shares. Their combined amount is reported; how the fit splits it between them is not a measurement.');
+    expect(r.warnings).toContain(set.message);
+    // The combined amount is what was put in: 2 + 0.5 per nucleus (mole ratio).
+    expect(set.amountPerNucleus).toBeCloseTo(fitted.get('ethanol')!.amountPerNucleus + fitted.get('ethanol-twin')!.amountPerNucleus, 12);
+    expect(Math.abs(set.amountPerNucleus / 2.5 - 1)).toBeLessThan(0.02);
+    const rows = r.amounts.filter((a) => set.members.includes(a.entryId));
+    expect(set.moleFraction).toBeCloseTo(rows[0].moleFraction + rows[1].moleFraction, 12);
+    for (const a of rows) {
+      expect(a.identifiable, a.entryId).toBe(false);
+      expect(a.indistinguishableSet, a.entryId).toBe('S1');
+      expect(fitted.get(a.entryId)!.identifiable, a.entryId).toBe(false);
+    }
+    for (const a of r.amounts.filter((x) => !set.members.includes(x.entryId))) expect(a.identifiable, a.entryId).toBe(true);
+    // Scored on its own lines only (one singlet): no small q-value on ethanol's signals.
+    expect(r.qValues.find((x) => x.entryId === 'ethanol-twin')!.qValue).toBe(1);
   }, T);
 
   it('gives concentrations through a named internal standard and warns when its nuclei differ', () => {
