@@ -56,7 +56,12 @@ export function analysisReportTable(r: AnalysisReport): string {
     const rows = f.components.map((c) => {
       const a = r.amounts.find((x) => x.entryId === c.entryId)!;
       const q = r.qValues.find((x) => x.entryId === c.entryId)!;
-      const notes = [a.isStandard ? 'internal standard' : '', c.belowQuantitationLimit ? 'S/N < 10: not quantifiable' : '', q.score === 0 ? 'one line of evidence' : '']
+      const notes = [
+        a.isStandard ? 'internal standard' : '',
+        a.identifiable === false ? `own amount not identifiable (set ${a.indistinguishableSet})` : '',
+        c.belowQuantitationLimit ? 'S/N < 10: not quantifiable' : '',
+        q.score === 0 ? 'one line of evidence' : '',
+      ]
         .filter(Boolean)
         .join('; ');
       return [
@@ -68,6 +73,10 @@ export function analysisReportTable(r: AnalysisReport): string {
     const widths = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
     const fmt = (row: string[]) => row.map((v, i) => (i === row.length - 1 ? v : v.padEnd(widths[i]))).join('  ').trimEnd();
     out.push(fmt(head), fmt(widths.map((w) => '-'.repeat(w))), ...rows.map(fmt));
+  }
+  for (const set of r.indistinguishable ?? []) {
+    const conc = set.concentrationMM !== null ? `, ${set.concentrationMM.toFixed(3)} mM${set.concentrationUncertaintyMM !== null ? ` ± ${set.concentrationUncertaintyMM.toFixed(3)}` : ''}` : '';
+    out.push(`Set ${set.id} (${set.members.join(' + ')}): combined mole fraction ${set.moleFraction.toFixed(3)}${set.moleFractionUncertainty !== null ? ` ± ${set.moleFractionUncertainty.toFixed(3)}` : ''}${conc}: these cannot be told apart by this data, their own amounts are not identifiable (see the warning)`);
   }
   if (r.purity) {
     const p = r.purity;

@@ -2,6 +2,7 @@
 // J. Org. Chem. 1997, 62, 7512, Table 1; Fulmer et al., Organometallics 2010, 29, 2176, Table 1;
 // CDCl3 column), analysed end to end.
 import { describe, expect, it } from 'vitest';
+import { analysisReportTable } from '../../../cli/commands/analyse';
 import { analyseMixture } from '../../../matching/analyse/analyseMixture';
 import { libraryToDecoys } from '../../../matching/confidence/libraryToDecoys';
 import { AnalysisReportSchema } from '../../../shared/analysis';
@@ -123,6 +124,9 @@ describe('analyseMixture', () => {
     for (const a of r.amounts.filter((x) => !set.members.includes(x.entryId))) expect(a.identifiable, a.entryId).toBe(true);
     // Scored on its own lines only (one singlet): no small q-value on ethanol's signals.
     expect(r.qValues.find((x) => x.entryId === 'ethanol-twin')!.qValue).toBe(1);
+    const table = analysisReportTable(r);
+    expect(table).toContain(`Set S1 (ethanol + ethanol-twin): combined mole fraction ${set.moleFraction.toFixed(3)}`);
+    expect(table.split('\n').find((l) => l.startsWith('ethanol-twin'))).toContain('own amount not identifiable (set S1)');
   }, T);
 
   it('gives concentrations through a named internal standard and warns when its nuclei differ', () => {
