@@ -55,25 +55,40 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
     }
     const out = segs.map((s) => {
       const values = new Float64Array(s.hi - s.lo);
-      for (const q of s.members) {
-        const { x, a, w } = q.l;
-        const height = a * lorentzianUnitArea(0, w);
-        if (!uniform) {
+      if (!uniform) {
+        for (const q of s.members) {
+          const { x, a, w } = q.l;
+          const height = a * lorentzianUnitArea(0, w);
           for (let i = q.lo; i < q.hi; i++) values[i - s.lo] += height * lorentzianFct(axis[i] - x, w);
-          continue;
         }
-        // On a uniform grid 1/L = 1 + k·(i − i_c)² is a quadratic in i: second differences are
-        // constant, so each point costs two additions and a division. The recurrence restarts
-        // from the exact value every RESTART points so rounding cannot accumulate.
-        const k = (4 * step * step) / (w * w);
-        for (let b = q.lo; b < q.hi; b += RESTART) {
-          const end = Math.min(q.hi, b + RESTART);
-          const u = (axis[0] + b * step - x) / step; // i − i_c at i = b
+        return { start: s.lo, values };
+      }
+      // On a uniform grid 1/L = 1 + k·(i − i_c)² is a quadratic in i: second differences are
+      // constant, so each point costs two additions and a division. The recurrence restarts
+      // from the exact value at every block of RESTART points so rounding cannot accumulate, and
+      // all lines are added block by block, while the block is still in cache.
+      const m = s.members.length;
+      const height = new Float64Array(m);
+      const kk = new Float64Array(m);
+      s.members.forEach((q, t) => {
+        height[t] = q.l.a * lorentzianUnitArea(0, q.l.w);
+        kk[t] = (4 * step * step) / (q.l.w * q.l.w);
+      });
+      for (let b0 = s.lo; b0 < s.hi; b0 += RESTART) {
+        const b1 = Math.min(s.hi, b0 + RESTART);
+        for (let t = 0; t < m; t++) {
+          const q = s.members[t];
+          const lo = Math.max(q.lo, b0);
+          const hi = Math.min(q.hi, b1);
+          if (lo >= hi) continue;
+          const k = kk[t];
+          const hgt = height[t];
+          const u = (axis[0] + lo * step - q.l.x) / step; // i − i_c at i = lo
           let inv = 1 + k * u * u;
           let d = k * (2 * u + 1);
           const dd = 2 * k;
-          for (let i = b; i < end; i++) {
-            values[i - s.lo] += height / inv;
+          for (let i = lo - s.lo, end = hi - s.lo; i < end; i++) {
+            values[i] += hgt / inv;
             inv += d;
             d += dd;
           }

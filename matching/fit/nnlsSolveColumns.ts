@@ -1,11 +1,22 @@
 import type { NnlsOptions, NnlsResult } from './nnlsSolve';
 
+/** Scratch columns reused by every least-squares step of one solve (the QR overwrites copies). */
+interface Work {
+  R: Float64Array[];
+  y: Float64Array;
+  u: Float64Array;
+}
+
 /** Least squares on the columns `cols` of A (column arrays) by Householder QR; null if rank deficient. */
-function leastSquares(A: Float64Array[], cols: number[], b: Float64Array): Float64Array | null {
+function leastSquares(A: Float64Array[], cols: number[], b: Float64Array, work: Work): Float64Array | null {
   const m = b.length;
   const p = cols.length;
-  const R = cols.map((c) => A[c].slice());
-  const y = b.slice();
+  const R = cols.map((c, k) => {
+    work.R[k].set(A[c]);
+    return work.R[k];
+  });
+  const y = work.y;
+  y.set(b);
   for (let k = 0; k < p; k++) {
     const v = R[k];
     let norm = 0;
@@ -13,7 +24,7 @@ function leastSquares(A: Float64Array[], cols: number[], b: Float64Array): Float
     norm = Math.sqrt(norm);
     if (norm === 0) return null;
     const alpha = v[k] > 0 ? -norm : norm;
-    const u = new Float64Array(m - k);
+    const u = work.u.subarray(0, m - k);
     u[0] = v[k] - alpha;
     for (let i = k + 1; i < m; i++) u[i - k] = v[i];
     let uu = 0;
@@ -53,6 +64,7 @@ export function nnlsSolveColumns(cols: Float64Array[], b: Float64Array, options:
   const blocked = new Uint8Array(n);
   const w = new Float64Array(n);
   const r = new Float64Array(m);
+  const work: Work = { R: Array.from({ length: n }, () => new Float64Array(m)), y: new Float64Array(m), u: new Float64Array(m) };
   const gradient = () => {
     r.set(b);
     for (let j = 0; j < n; j++) if (x[j] !== 0) { const c = cols[j]; for (let i = 0; i < m; i++) r[i] -= c[i] * x[j]; }
@@ -71,7 +83,7 @@ export function nnlsSolveColumns(cols: Float64Array[], b: Float64Array, options:
     iterations++;
     inP[t] = 1;
     let P = [...Array(n).keys()].filter((j) => inP[j]);
-    let s = leastSquares(cols, P, b);
+    let s = leastSquares(cols, P, b, work);
     if (s === null) { inP[t] = 0; blocked[t] = 1; continue; }
     let guard = 0;
     while (s !== null && P.some((_, k) => s![k] <= 0) && guard++ < 10 * n) {
@@ -85,7 +97,7 @@ export function nnlsSolveColumns(cols: Float64Array[], b: Float64Array, options:
       x[leaving] = 0;
       for (const j of P) if (x[j] <= 1e-14 * xmax) { x[j] = 0; inP[j] = 0; }
       P = [...Array(n).keys()].filter((j) => inP[j]);
-      s = P.length ? leastSquares(cols, P, b) : new Float64Array(0);
+      s = P.length ? leastSquares(cols, P, b, work) : new Float64Array(0);
     }
     if (s === null) break;
     x.fill(0);
