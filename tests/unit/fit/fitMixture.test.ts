@@ -108,6 +108,22 @@ describe('fitMixture', () => {
     expect(b.axis[0]).toBe(down.ppm[0]);
     for (const c of a.components) expect(b.components.find((x) => x.entryId === c.entryId)!.amountPerNucleus).toBeCloseTo(c.amountPerNucleus, 8);
   }, T);
+  it('counts as distinct only the supported lines no other fitted candidate has a line within a linewidth of', () => {
+    // An invented look-alike: ethanol's quartet on the same shifts plus one singlet of its own.
+    const e = get('ethanol');
+    const quartet = e.signals.find((sg) => sg.multiplicity === 'q')!;
+    const copy = { ...e, id: 'copy', name: 'copy', signals: [quartet, { nucleus: '1H' as const, shift: 6.4, multiplicity: 's', j: [], nuclei: 1 }] };
+    const r = fitMixture(synthPeaks([{ entry: e, amount: 2 }, { entry: copy, amount: 0.5 }]), [e, copy]);
+    expect(FitResultSchema.safeParse(r).success).toBe(true);
+    const byId = new Map(r.components.map((c) => [c.entryId, c]));
+    // ethanol keeps its triplet (three resolved lines); the copy keeps only its singlet.
+    expect(byId.get('ethanol')!.distinctLines).toBe(3);
+    expect(byId.get('copy')!.distinctLines).toBe(1);
+    expect(byId.get('copy')!.resolvedLines).toBe(5);
+    // Alone, every supported line is distinct.
+    const alone = fitMixture(synthPeaks([{ entry: e, amount: 2 }]), [e]).components[0];
+    expect(alone.distinctLines).toBe(alone.resolvedLines);
+  }, T);
   it('lists a mixture peak no candidate explains', () => {
     const mix = synthSpectrum([...parts, { entry: get('benzene'), amount: 0.3 }], { points: 8192 });
     const r = fitMixture(mix, lib.filter((e) => e.id !== 'benzene'), { linewidthHz: 1 });
