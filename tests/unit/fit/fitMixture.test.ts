@@ -111,7 +111,7 @@ describe('fitMixture', () => {
   it('counts as distinct only the supported lines no other fitted candidate has a line within a linewidth of', () => {
     // An invented look-alike: ethanol's quartet on the same shifts plus one singlet of its own.
     const e = get('ethanol');
-    const quartet = e.signals.find((sg) => sg.multiplicity === 'q')!;
+    const quartet = e.signals.find((sg) => sg.nucleus === '1H' && sg.multiplicity === 'q')!;
     const copy = { ...e, id: 'copy', name: 'copy', signals: [quartet, { nucleus: '1H' as const, shift: 6.4, multiplicity: 's', j: [], nuclei: 1 }] };
     const r = fitMixture(synthPeaks([{ entry: e, amount: 2 }, { entry: copy, amount: 0.5 }]), [e, copy]);
     expect(FitResultSchema.safeParse(r).success).toBe(true);
