@@ -13,6 +13,7 @@ import { entryToLines } from '../matching/multiplets';
 import { lorentzianUnitArea } from '../matching/lineshape';
 import { spectrumPickPeaks } from '../matching/spectrum';
 import { spectrumToJcamp } from '../matching/io';
+import { randomSeeded } from '../matching/confidence/randomSeeded';
 
 const ROOT = path.resolve(__dirname, '..');
 const OUT_DIR = path.join(ROOT, 'library-data/demo-mixtures');
@@ -100,14 +101,7 @@ export type DemoMixtureManifest = z.infer<typeof DemoMixtureManifestSchema>;
 
 /** mulberry32: a small, well-known 32-bit seeded generator, so every build gives the same noise. */
 function seededUniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  return randomSeeded(seed);
 }
 
 /** Standard normal deviates by the Box–Muller transform. */

@@ -4,16 +4,10 @@
 import { multipletToLines } from '../../../matching/multiplets/multipletToLines';
 import type { LibraryEntry, Signal1H } from '../../../shared/libraryEntry';
 import type { PeakListMixture } from '../../../shared/mixture';
+import { randomSeeded } from '../../../matching/confidence/randomSeeded';
 
 export function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  return randomSeeded(seed);
 }
 
 type Rand = () => number;
