@@ -22,6 +22,8 @@ export interface LibraryIndex {
   sigNuclei: Float64Array;
   sigExchangeable: Uint8Array;
   sigShift: Float64Array;
+  /** Half extent of an unresolved multiplet at this frequency, ppm (0 for resolved ones and 13C). */
+  sigHalf: Float64Array;
   /** Extent of each signal's lines, ppm, widened by the half extent of an unresolved multiplet. */
   sigLo: Float64Array;
   sigHi: Float64Array;
@@ -79,6 +81,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
   const sigNuclei = new Float64Array(S);
   const sigExchangeable = new Uint8Array(S);
   const sigShift = new Float64Array(S);
+  const sigHalf = new Float64Array(S);
   const sigLo = new Float64Array(S);
   const sigHi = new Float64Array(S);
   const lineStart = new Int32Array(S + 1);
@@ -96,6 +99,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     sigNuclei[k] = s.n;
     sigExchangeable[k] = s.x ? 1 : 0;
     sigShift[k] = s.shift;
+    sigHalf[k] = s.h;
     lineStart[k] = l;
     for (let i = 0; i < s.ppm.length; i++, l++) {
       linePpm[l] = s.ppm[i];
@@ -140,6 +144,7 @@ export function libraryIndexBuild(entries: readonly LibraryEntry[], nucleus: Nuc
     sigNuclei,
     sigExchangeable,
     sigShift,
+    sigHalf,
     sigLo,
     sigHi,
     lineStart,
