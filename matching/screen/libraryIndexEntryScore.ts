@@ -1,3 +1,4 @@
+import { peaksShiftGridLowerBound, type PeaksShiftGrid } from '../peaks/peaksShiftGrid';
 import type { LibraryIndex } from './libraryIndexBuild';
 
 /**
@@ -92,18 +93,6 @@ function growSignals(sc: EntryScoreScratch, signals: number, lines: number): voi
   if (lines > sc.lineTo.length) sc.lineTo = new Int32Array(Math.max(lines, sc.lineTo.length * 2));
 }
 
-/** First index in [0, n) with shifts[i] ≥ v (n when none). */
-function lowerBound(shifts: Float64Array, v: number): number {
-  let lo = 0;
-  let hi = shifts.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (shifts[mid] < v) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
 /** Index in [from, to) of the shift closest to v (ties to the lower); from < to. */
 function nearest(shifts: Float64Array, from: number, to: number, v: number): number {
   let lo = from;
@@ -132,7 +121,7 @@ function nearest(shifts: Float64Array, from: number, to: number, v: number): num
 export function libraryIndexEntryScore(
   index: LibraryIndex,
   e: number,
-  shifts: Float64Array,
+  grid: PeaksShiftGrid,
   intensities: Float64Array,
   tol: number,
   optionalRegions: ReadonlyArray<{ from: number; to: number }>,
@@ -143,6 +132,7 @@ export function libraryIndexEntryScore(
   const M = index.sigStart[e + 1] - s0;
   const { lineStart, linePpm, lineWeight, sigHalf, sigShift, sigNuclei, sigExchangeable } = index;
   growSignals(sc, M, lineStart[s0 + M] - lineStart[s0]);
+  const shifts = grid.shifts;
   const P = shifts.length;
   sc.score = 0;
   sc.explainedShare = 0;
@@ -174,7 +164,7 @@ export function libraryIndexEntryScore(
     const h = n === 1 ? sigHalf[k] : 0;
     const lo = linePpm[ls] - tol - h;
     const hi = linePpm[ls + n - 1] + tol + h;
-    const from = lowerBound(shifts, lo);
+    const from = peaksShiftGridLowerBound(grid, lo);
     let to = from;
     while (to < P && shifts[to] <= hi) to++;
     sc.from[m] = from;

@@ -2,6 +2,7 @@ import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Mixture } from '../../shared/mixture';
 import type { ScreenOptions, ScreenResult } from '../../shared/screening';
 import { entryScore, type SignalMatchSummary } from '../score/entryScore';
+import { peaksShiftGridBuild } from '../peaks/peaksShiftGrid';
 import type { LibraryIndex } from './libraryIndexBuild';
 import { libraryIndexCached } from './libraryIndexCached';
 import { entryScoreScratch, libraryIndexEntryScore } from './libraryIndexEntryScore';
@@ -57,13 +58,14 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
   const direct = !Array.isArray(candidates);
   // Score every candidate without building evidence (typed arrays, no allocation per entry).
   const sc = entryScoreScratch(shifts.length);
+  const grid = peaksShiftGridBuild(shifts);
   const hitE: number[] = [];
   const hitScore: number[] = [];
   const hitShare: number[] = [];
   let survived = 0;
   for (let i = 0; i < candidates.length; i++) {
     const e = direct ? i : candidates[i];
-    libraryIndexEntryScore(index, e, shifts, intensities, tol, set.regions, minScore, sc);
+    libraryIndexEntryScore(index, e, grid, intensities, tol, set.regions, minScore, sc);
     if (sc.pruned) continue;
     survived++;
     if (sc.score > 0 && sc.score >= minScore) {

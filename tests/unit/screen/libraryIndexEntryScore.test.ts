@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { entryScore } from '../../../matching/score/entryScore';
+import { peaksShiftGridBuild } from '../../../matching/peaks/peaksShiftGrid';
 import { libraryIndexBuild } from '../../../matching/screen/libraryIndexBuild';
 import { libraryIndexEntryMatch } from '../../../matching/screen/libraryIndexEntryMatch';
 import { entryScoreScratch, libraryIndexEntryScore } from '../../../matching/screen/libraryIndexEntryScore';
@@ -62,6 +63,7 @@ describe('libraryIndexEntryScore', () => {
         const intensities = Float64Array.from(shifts, () => rand() * 10);
         const regions = rand() < 0.5 ? [{ from: 7.21, to: 7.31 }] : [];
         const sc = entryScoreScratch(shifts.length);
+        const grid = peaksShiftGridBuild(shifts);
         for (let e = 0; e < index.entries.length; e++) {
           const matches = libraryIndexEntryMatch(index, e, shifts, intensities, tol);
           const ref = entryScore(
@@ -74,7 +76,7 @@ describe('libraryIndexEntryScore', () => {
             })),
             { tolerancePpm: tol },
           );
-          libraryIndexEntryScore(index, e, shifts, intensities, tol, regions, 0, sc);
+          libraryIndexEntryScore(index, e, grid, intensities, tol, regions, 0, sc);
           // Without a threshold only an entry with no peak in any window is ruled out.
           if (sc.pruned) expect(ref.score).toBe(0);
           else {
@@ -84,7 +86,7 @@ describe('libraryIndexEntryScore', () => {
           }
           checked.total++;
           // With a threshold, an entry is ruled out only when it could not have reached it.
-          libraryIndexEntryScore(index, e, shifts, intensities, tol, regions, 0.5, sc);
+          libraryIndexEntryScore(index, e, grid, intensities, tol, regions, 0.5, sc);
           if (sc.pruned) expect(ref.score).toBeLessThan(0.5);
           else expect(sc.score).toBe(ref.score);
         }
@@ -105,9 +107,9 @@ describe('libraryIndexEntryScore', () => {
     ] });
     const index = libraryIndexBuild(lib, '1H', 400);
     const sc = entryScoreScratch(1);
-    libraryIndexEntryScore(index, 0, Float64Array.of(2.1), Float64Array.of(1), 0.03, [], 0.5, sc);
+    libraryIndexEntryScore(index, 0, peaksShiftGridBuild(Float64Array.of(2.1)), Float64Array.of(1), 0.03, [], 0.5, sc);
     expect(sc.pruned).toBe(true);
-    libraryIndexEntryScore(index, 0, Float64Array.of(2.1), Float64Array.of(1), 0.03, [], 0.1, sc);
+    libraryIndexEntryScore(index, 0, peaksShiftGridBuild(Float64Array.of(2.1)), Float64Array.of(1), 0.03, [], 0.1, sc);
     expect(sc.pruned).toBe(false);
     expect(sc.explainedShare).toBeCloseTo(3 / 9, 12);
   });
