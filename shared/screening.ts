@@ -100,6 +100,16 @@ export const AmbiguityGroupSchema = z.object({
 });
 export type AmbiguityGroup = z.infer<typeof AmbiguityGroupSchema>;
 
+export const ScreenCrowdingSchema = z
+  .object({
+    windowHitShare: z.number().min(0).max(1).describe('share of library signal windows (lines ± tolerance, displaced by ±20 tolerances so present compounds do not count) that hold a mixture peak'),
+    entriesAllHitShare: z.number().min(0).max(1).describe('share of library entries with a mixture peak in every required signal window: what a random entry gets by chance'),
+    entriesSampled: z.number().int().nonnegative().describe('library entries the two shares were measured on (up to 500, evenly spaced)'),
+    warning: z.string().nullable().describe('set when the mixture is crowded for this tolerance (windowHitShare ≥ 0.4)'),
+  })
+  .describe('how crowded the mixture is for the tolerance, seen from the library');
+export type ScreenCrowding = z.infer<typeof ScreenCrowdingSchema>;
+
 export const ScreenResultSchema = z.object({
   mixtureName: z.string(),
   nucleus: NucleusSchema,
@@ -114,6 +124,7 @@ export const ScreenResultSchema = z.object({
   peaksUsed: z.array(UsedPeakSchema),
   peaksExcluded: z.array(ExcludedPeakSchema),
   unexplainedPeaks: z.array(z.number().int().nonnegative()).describe('indices of used peaks no reported candidate explains'),
+  crowding: ScreenCrowdingSchema,
   caution: z.string(),
 });
 export type ScreenResult = z.infer<typeof ScreenResultSchema>;

@@ -17,6 +17,7 @@ export const BATCH_COLUMNS = [
   'mixture',
   'peaks_used',
   'peaks_set_aside',
+  'window_hit_share',
   'rank',
   'entry_id',
   'name',
@@ -69,7 +70,7 @@ export async function run(argv: string[]): Promise<number> {
     const rows: Array<Record<(typeof BATCH_COLUMNS)[number], string | number>> = [];
     for (const { file, mixture } of mixtures) {
       const r = screenMixture(mixture, entries, options);
-      const base = { file, mixture: r.mixtureName, peaks_used: r.peaksUsed.length, peaks_set_aside: r.peaksExcluded.length };
+      const base = { file, mixture: r.mixtureName, peaks_used: r.peaksUsed.length, peaks_set_aside: r.peaksExcluded.length, window_hit_share: r.crowding.windowHitShare.toFixed(3) };
       if (r.candidates.length === 0) rows.push({ ...base, rank: '', entry_id: '', name: '', score: '', explained_share: '', contaminant: '', ambiguity_group: '', shadowed_by: '' });
       for (const c of r.candidates) {
         rows.push({
@@ -84,7 +85,7 @@ export async function run(argv: string[]): Promise<number> {
           shadowed_by: c.shadowedBy.join(' '),
         });
       }
-      console.log(`${file}: ${r.candidates.length} candidate(s)${r.candidates[0] ? `, best ${r.candidates[0].name} (${r.candidates[0].score.toFixed(3)})` : ''}`);
+      console.log(`${file}: ${r.candidates.length} candidate(s)${r.candidates[0] ? `, best ${r.candidates[0].name} (${r.candidates[0].score.toFixed(3)})` : ''}${r.crowding.warning ? ' — crowded: many entries reach the threshold by chance' : ''}`);
     }
     const csv = `# ${CAUTION_TEXT}\n${Papa.unparse({ fields: [...BATCH_COLUMNS], data: rows.map((row) => BATCH_COLUMNS.map((c) => row[c])) }, { newline: '\n' })}\n`;
     const tmp = `${values.out}.tmp-${process.pid}`;

@@ -111,9 +111,10 @@ function pct(v: number): string {
 export function screenResultTable(r: ScreenResult): string {
   const out: string[] = [];
   out.push(`Mixture "${r.mixtureName}" (${r.nucleus}, ${r.mhz} MHz): ${r.peaksUsed.length} peaks used, ${r.peaksExcluded.length} set aside, ${r.entriesScreened} entries screened, tolerance ±${r.tolerancePpm} ppm, threshold ${r.minScore}`);
+  if (r.crowding.warning) out.push(`Warning: ${r.crowding.warning}.`);
   if (r.candidates.length === 0) out.push('No candidate reaches the threshold.');
-  else if (r.candidatesAboveThreshold > r.candidates.length) out.push(`${r.candidatesAboveThreshold} entries reach the threshold; the best ${r.candidates.length} are shown.`);
   else {
+    if (r.candidatesAboveThreshold > r.candidates.length) out.push(`${r.candidatesAboveThreshold} entries reach the threshold; the best ${r.candidates.length} are shown.`);
     const rows = r.candidates.map((c) => {
       const flags = [c.contaminant ? 'contaminant' : '', c.ambiguityGroup ? `group ${c.ambiguityGroup}` : '', c.shadowedBy.length ? `shadowed by ${c.shadowedBy.join(', ')}` : '']
         .filter(Boolean)

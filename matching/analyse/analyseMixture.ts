@@ -97,6 +97,7 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
   }
   if (fit.unexplainedPeaks.length > 0) warnings.push(`${fit.unexplainedPeaks.length} mixture peak(s) not explained by any fitted compound`);
   for (const g of screen.ambiguityGroups) warnings.push(`screening could not tell apart: ${g.members.join(', ')}`);
+  if (screen.crowding.warning) warnings.push(screen.crowding.warning);
   const references = library.filter((e) => e.category === 'reference' && e.id !== standard?.entryId).map((e) => e.id);
   const amounts = fitToAmounts(fit, standard, { excludeFromFractions: references }).map((a) =>
     setOf.has(a.entryId) ? { ...a, identifiable: false, indistinguishableSet: setOf.get(a.entryId)! } : { ...a, identifiable: true },

@@ -23,7 +23,9 @@ export function peaksShiftGridBuild(shifts: Float64Array): PeaksShiftGrid {
   const origin = shifts[0];
   const span = shifts[n - 1] - origin;
   const cells = Math.max(1, Math.min(4 * n, 1 << 22));
-  const perPpm = span > 0 ? cells / span : 1;
+  // A span too small for the cell count (denormal differences) gives one cell: still exact, only slower.
+  const fine = cells / span;
+  const perPpm = span > 0 && Number.isFinite(fine) ? fine : 0;
   const cellOf = (v: number) => Math.floor((v - origin) * perPpm);
   const last = cellOf(shifts[n - 1]);
   const cellFirst = new Int32Array(last + 2);

@@ -7,3 +7,4 @@ export * from './entryRankCompare';
 export * from './shiftInRegions';
 export * from './screenResultAssemble';
 export * from './screenMixture';
+export * from './screenCrowding';

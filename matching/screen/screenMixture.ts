@@ -2,11 +2,12 @@ import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Mixture } from '../../shared/mixture';
 import type { ScreenOptions, ScreenResult } from '../../shared/screening';
 import { entryScore, type SignalMatchSummary } from '../score/entryScore';
-import { peaksShiftGridBuild } from '../peaks/peaksShiftGrid';
+import { peaksShiftGridBuild, peaksShiftGridLowerBound } from '../peaks/peaksShiftGrid';
 import type { LibraryIndex } from './libraryIndexBuild';
 import { libraryIndexCached } from './libraryIndexCached';
 import { entryScoreScratch, libraryIndexEntryScore } from './libraryIndexEntryScore';
 import { libraryIndexEntryMatch } from './libraryIndexEntryMatch';
+import { crowdingSample, screenCrowding, type SignalWindow } from './screenCrowding';
 import { screenResultAssemble, type EntryFound } from './screenResultAssemble';
 import { shiftInRegions } from './shiftInRegions';
 import { screenPrepare } from './screenPrepare';
@@ -94,7 +95,22 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
     }
     return { entry: index.entries[e], matches: matches.map((m) => ({ ...m, signalIndex: index.sigSource[m.signal] })), score };
   });
-  return screenResultAssemble(mixture, prep, nEntries, found, hitE.length);
+  // How crowded the mixture is for this tolerance (sampled entries; the grid answers each window).
+  const crowding = screenCrowding(
+    crowdingSample(nEntries).map((e) => {
+      const out: SignalWindow[] = [];
+      for (let k = index.sigStart[e]; k < index.sigStart[e + 1]; k++) {
+        out.push({ lo: index.sigLo[k] - tol, hi: index.sigHi[k] + tol, optional: index.sigExchangeable[k] === 1 || shiftInRegions(index.sigShift[k], set.regions) });
+      }
+      return out;
+    }),
+    (lo, hi) => {
+      const i = peaksShiftGridLowerBound(grid, lo);
+      return i < shifts.length && shifts[i] <= hi;
+    },
+    tol,
+  );
+  return screenResultAssemble(mixture, prep, nEntries, found, crowding, hitE.length);
 }
 
 /**

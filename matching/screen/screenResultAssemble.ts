@@ -1,7 +1,7 @@
 import { CAUTION_TEXT } from '../../shared/caution';
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { Mixture } from '../../shared/mixture';
-import type { ScreenCandidate, ScreenResult, SignalEvidence, UnmatchedSignal } from '../../shared/screening';
+import type { ScreenCandidate, ScreenCrowding, ScreenResult, SignalEvidence, UnmatchedSignal } from '../../shared/screening';
 import type { EntryScore } from '../score/entryScore';
 import type { MultipletPeakMatch } from '../score/multipletsMatchPeaks';
 import { candidatesRelate } from './candidatesRelate';
@@ -22,7 +22,7 @@ export interface EntryFound {
  * shadowing among the reported candidates (worked out in score order), unexplained peaks and the
  * caution. The final list puts candidates that are not shadowed first, each part in score order.
  */
-export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, entriesScreened: number, scored: EntryFound[], aboveThreshold = scored.length): ScreenResult {
+export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, entriesScreened: number, scored: EntryFound[], crowding: ScreenCrowding, aboveThreshold = scored.length): ScreenResult {
   let found = scored;
   found.sort((a, b) => entryRankCompare(a.entry.id, a.score, b.entry.id, b.score));
   // Groups and shadowing are worked out among the reported candidates only.
@@ -57,6 +57,7 @@ export function screenResultAssemble(mixture: Mixture, prep: ScreenPrepared, ent
     peaksUsed: prep.set.used,
     peaksExcluded: prep.set.excluded,
     unexplainedPeaks: prep.set.used.map((p) => p.index).filter((i) => !explained.has(i)),
+    crowding,
     caution: CAUTION_TEXT,
   };
 }

@@ -4,7 +4,7 @@
 // result assembly as screenMixture. It is the baseline the benchmark measures against and the
 // oracle the tests compare with.
 import { entryScore, multipletsMatchPeaks, signalToMultipletLines, type MultipletLines } from '../../../matching/score';
-import { screenPrepare, screenResultAssemble, shiftInRegions, type EntryFound } from '../../../matching/screen';
+import { crowdingSample, screenCrowding, screenPrepare, screenResultAssemble, shiftInRegions, type EntryFound, type SignalWindow } from '../../../matching/screen';
 import type { LibraryEntry } from '../../../shared/libraryEntry';
 import type { Mixture } from '../../../shared/mixture';
 import type { ScreenOptions, ScreenResult } from '../../../shared/screening';
@@ -34,6 +34,8 @@ export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], option
   const { tol, minScore, shifts, intensities, set } = prep;
   const found: EntryFound[] = [];
   let screened = 0;
+  // Windows of every screened entry's signals, for the crowding figures (same sample as screenMixture).
+  const windows: SignalWindow[][] = [];
   for (const entry of entries) {
     if (entry.retired && !prep.includeRetired) continue;
     if (prep.solvent !== undefined && entry.solvent !== prep.solvent && entry.solvent !== 'other') continue;
@@ -41,10 +43,21 @@ export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], option
     if (signals.length === 0) continue;
     screened++;
     const multiplets = signals.map(({ s }) => signalToMultipletLines(s, mixture.mhz));
-    const windows = multiplets.map((m) => scanAll(m, shifts, tol));
+    const scans = multiplets.map((m) => scanAll(m, shifts, tol));
     let w = 0;
-    const matches = multipletsMatchPeaks(multiplets, shifts, intensities, tol, mixture.mhz, () => windows[w++]);
+    const matches = multipletsMatchPeaks(multiplets, shifts, intensities, tol, mixture.mhz, () => scans[w++]);
     const allOptional = signals.every(({ s }) => s.nucleus === '1H' && s.exchangeable === true);
+    windows.push(
+      multiplets.map((m, k) => {
+        const h = m.halfExtentPpm ?? 0;
+        const s = signals[k].s;
+        return {
+          lo: Math.min(s.shift, m.ppm[0]) - h - tol,
+          hi: Math.max(s.shift, m.ppm[m.ppm.length - 1]) + h + tol,
+          optional: (s.nucleus === '1H' && s.exchangeable === true && !allOptional) || shiftInRegions(s.shift, set.regions),
+        };
+      }),
+    );
     const summaries = signals.map(({ s }, k) => ({
       nuclei: s.nuclei,
       exchangeable: (s.nucleus === '1H' && s.exchangeable === true && !allOptional) || shiftInRegions(s.shift, set.regions),
@@ -55,5 +68,10 @@ export function screenAllPairs(mixture: Mixture, entries: LibraryEntry[], option
     const score = entryScore(summaries, { tolerancePpm: tol });
     if (score.score > 0 && score.score >= minScore) found.push({ entry, matches: matches.map((m, k) => ({ ...m, signalIndex: signals[k].i })), score });
   }
-  return screenResultAssemble(mixture, prep, screened, found);
+  const crowding = screenCrowding(
+    crowdingSample(windows.length).map((i) => windows[i]),
+    (lo, hi) => shifts.some((x) => x >= lo && x <= hi),
+    tol,
+  );
+  return screenResultAssemble(mixture, prep, screened, found, crowding);
 }

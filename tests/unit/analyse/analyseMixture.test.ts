@@ -149,4 +149,12 @@ describe('analyseMixture', () => {
       expect(Math.abs(c!.amountPerNucleus / amount - 1), id).toBeLessThan(0.05);
     }
   }, T);
+
+  it('passes the screen\'s crowding warning on to the report, and gives none for a sparse mixture', () => {
+    expect(analyseMixture(synthPeaks(parts), lib).warnings.some((w) => w.startsWith('crowded mixture'))).toBe(false);
+    // A line every 0.02 ppm over 0.5–10 ppm: every ±0.03 ppm window holds a peak by chance.
+    const comb = { ...synthPeaks(parts), name: 'comb', peaks: Array.from({ length: 476 }, (_, i) => ({ shift: 0.5 + i * 0.02, intensity: 1, widthHz: 1 })) };
+    const r = analyseMixture(comb, lib, { decoySets: 1 });
+    expect(r.warnings.find((w) => w.startsWith('crowded mixture'))).toMatch(/^crowded mixture for ±0.03 ppm: \d+ % of library signal windows hold a mixture peak/);
+  }, T);
 });

@@ -4,7 +4,7 @@ import path from 'node:path';
 import Papa from 'papaparse';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { run as batch } from '../../../cli/commands/batch';
-import { run as screen } from '../../../cli/commands/screen';
+import { run as screen, screenResultTable } from '../../../cli/commands/screen';
 import { spectrumToJcamp } from '../../../matching/io';
 import { CAUTION_TEXT } from '../../../shared/caution';
 import { synthSpectrum } from '../../fixtures/screen/synthSpectrum';
@@ -97,6 +97,22 @@ describe('tessera screen', () => {
   });
 });
 
+describe('screen table', () => {
+  it('warns about a crowded mixture, and still lists the best when more reach the threshold than are shown', async () => {
+    const dir = tmp();
+    const m = path.join(dir, 'comb.csv');
+    // A line every 0.02 ppm over 0.5–10 ppm: every ±0.03 ppm window holds a peak.
+    writeFileSync(m, 'shift,intensity\n' + Array.from({ length: 476 }, (_, i) => `${(0.5 + i * 0.02).toFixed(2)},1`).join('\n') + '\n');
+    expect(await screen(['--library', LIB, '--mixture', m, '--solvent', 'CDCl3', '--mhz', '600', '--json'])).toBe(0);
+    const r = JSON.parse(out.join('\n'));
+    expect(r.crowding.warning).toMatch(/^crowded mixture for ±0.03 ppm/);
+    const text = screenResultTable({ ...r, candidatesAboveThreshold: r.candidates.length + 7 });
+    expect(text).toContain('Warning: crowded mixture for ±0.03 ppm');
+    expect(text).toContain(`${r.candidates.length + 7} entries reach the threshold; the best ${r.candidates.length} are shown.`);
+    expect(text.split('\n').filter((l) => /^\d+\s+\d\.\d{3}\s/.test(l))).toHaveLength(r.candidates.length);
+  });
+});
+
 describe('tessera batch', () => {
   it('refuses a missing --out and an empty folder', async () => {
     expect(await batch(['--library', LIB, '--folder', FIX])).toBe(2);
@@ -123,6 +139,8 @@ describe('tessera batch', () => {
       ['contam-tert-butyl-alcohol-cdcl3', 'contam-ethyl-acetate-cdcl3'],
     ]);
     expect(rows.filter((r) => r.file === 'b-nothing.csv')).toEqual([expect.objectContaining({ rank: '', entry_id: '' })]);
+    // One peak at 9.9 ppm: no library window holds it by chance.
+    expect(rows.find((r) => r.file === 'b-nothing.csv')!.window_hit_share).toBe('0.000');
     const acetone = rows.filter((r) => r.file === 'c-acetone.jdx');
     expect(acetone.map((r) => r.entry_id).sort()).toEqual(['contam-acetone-cdcl3', 'demo-acetone-twin']);
     expect(acetone.every((r) => r.ambiguity_group === 'G1')).toBe(true);
