@@ -20,10 +20,14 @@ import { screenPrepare } from './screenPrepare';
  * against entries recorded in that solvent, plus entries recorded as "other"), maxCandidates 100
  * (the best; candidatesAboveThreshold says how many reached minScore).
  *
- * Cost: the library's shift index is built once per library array (libraryIndexCached); each
- * peak visits only the index bins within its window, and an entry is matched in full only when
- * the nuclei its hit signals hold could still reach minScore (E is an upper bound of the score).
- * See matching/score/entryScore.ts for the score.
+ * Cost: the library's shift index is built once per library array (libraryIndexCached). A sparse
+ * mixture's peaks visit only the index bins within their windows, and an entry is scored only
+ * when the nuclei its hit signals hold could still reach minScore (E² bounds the score); a dense
+ * mixture, which would reach nearly every entry, sends every entry to the scorer, which applies
+ * the same bound from its own windows. Entries are scored without evidence
+ * (libraryIndexEntryScore); only the reported best are matched again with it. The result also
+ * says how crowded the mixture is for the tolerance (screenCrowding). See
+ * matching/score/entryScore.ts for the score.
  */
 export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options: ScreenOptions = {}): ScreenResult {
   const prep = screenPrepare(mixture, entries, options);
@@ -35,28 +39,24 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
   // windows would visit the library's signals more than LIBRARY_PASS_MAX_VISITS times over) reaches
   // nearly every entry anyway, so every entry goes straight to the scorer, which applies the same
   // bound from its own windows. Both are exact: the choice changes the cost, never the result.
-  let candidates: ArrayLike<number>;
-  let touchedCount: number;
+  // null: every entry.
+  let survivors: number[] | null = null;
+  let touchedCount = nEntries;
   if (libraryPassVisits(index, shifts, tol) <= LIBRARY_PASS_MAX_VISITS * index.sigEntry.length) {
     const touched = indexHits(index, shifts, tol, set.regions);
     const { hitRequired, hitExchangeable } = index.scratch;
     // Upper bound of E per touched entry (hidden signals counted as found); score ≤ E². The scratch
     // is cleared before any scoring, so an error below cannot leave it dirty.
-    const survivors: number[] = [];
+    const kept: number[] = [];
     for (const e of touched) {
       const bound = (hitRequired[e] + hitExchangeable[e]) / (index.entryRequired[e] + hitExchangeable[e]);
       hitRequired[e] = 0;
       hitExchangeable[e] = 0;
-      if (bound * bound >= minScore - 1e-12) survivors.push(e);
+      if (bound * bound >= minScore - 1e-12) kept.push(e);
     }
-    survivors.sort((a, b) => a - b);
-    candidates = survivors;
+    survivors = kept.sort((a, b) => a - b);
     touchedCount = touched.length;
-  } else {
-    candidates = { length: nEntries } as ArrayLike<number>;
-    touchedCount = nEntries;
   }
-  const direct = !Array.isArray(candidates);
   // Score every candidate without building evidence (typed arrays, no allocation per entry).
   const sc = entryScoreScratch(shifts.length);
   const grid = peaksShiftGridBuild(shifts);
@@ -64,8 +64,9 @@ export function screenMixture(mixture: Mixture, entries: LibraryEntry[], options
   const hitScore: number[] = [];
   const hitShare: number[] = [];
   let survived = 0;
-  for (let i = 0; i < candidates.length; i++) {
-    const e = direct ? i : candidates[i];
+  const count = survivors ? survivors.length : nEntries;
+  for (let i = 0; i < count; i++) {
+    const e = survivors ? survivors[i] : i;
     libraryIndexEntryScore(index, e, grid, intensities, tol, set.regions, minScore, sc);
     if (sc.pruned) continue;
     survived++;
