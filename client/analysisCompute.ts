@@ -2,27 +2,12 @@ import type { LibraryEntry } from '../shared/libraryEntry';
 import { MixtureSchema, type Mixture } from '../shared/mixture';
 import type { ScreenResult } from '../shared/screening';
 import { InputError, mixtureParseFile } from '../matching/io';
-import type { AnalysisSettings, StoredAnalysis } from '../localdb/analyses';
+import type { StoredAnalysis } from '../localdb/analyses';
 import { engineAnalyse, engineScreen } from './engine';
 import { newId } from './ids';
+import type { AnalysisInput } from './analysisStages';
 
-export type AnalysisStage = 'reading' | 'screening' | 'fitting' | 'saving';
-
-export const STAGE_TEXT: Record<AnalysisStage, string> = {
-  reading: 'Reading the mixture',
-  screening: 'Screening the library',
-  fitting: 'Fitting and quantifying candidates',
-  saving: 'Keeping the result on this device',
-};
-
-export interface AnalysisInput {
-  /** A file's name (its extension picks the reader) or "pasted.txt" for pasted text. */
-  fileName: string;
-  content: string;
-  name?: string;
-  demo?: boolean;
-  settings: AnalysisSettings;
-}
+export { STAGE_TEXT, type AnalysisInput, type AnalysisStage } from './analysisStages';
 
 export function analysisMixture(input: AnalysisInput): Mixture {
   const s = input.settings;

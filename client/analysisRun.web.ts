@@ -1,12 +1,21 @@
 import type { LibraryEntry } from '../shared/libraryEntry';
 import type { InputIssue } from '../shared/inputIssue';
 import type { StoredAnalysis } from '../localdb/analyses';
-import { InputError } from '../matching/io';
-import { analysisRunHere } from './analysisRun';
-import type { AnalysisInput, AnalysisStage } from './analysisCompute';
+import { InputError } from '../matching/io/InputError';
+import type { AnalysisInput, AnalysisStage } from './analysisStages';
 import type { WorkerReply } from './analysis.worker';
 
-export { STAGE_TEXT, type AnalysisInput, type AnalysisStage } from './analysisCompute';
+export { STAGE_TEXT, type AnalysisInput, type AnalysisStage } from './analysisStages';
+
+/**
+ * The engine on this thread, fetched only when no worker can run (client/engineOnDemand.ts, a
+ * separate chunk of the export), so the page's first download does not carry a second copy of the
+ * engine next to the worker's.
+ */
+async function analysisRunHere(input: AnalysisInput, library: LibraryEntry[], onStage: (s: AnalysisStage) => void): Promise<StoredAnalysis> {
+  const { analysisRunHere: here } = await import('./engineOnDemand');
+  return here(input, library, onStage);
+}
 
 let worker: Worker | null = null;
 let broken = false;

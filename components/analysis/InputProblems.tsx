@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { InputError } from '../../matching/io';
+import { InputError } from '../../matching/io/InputError';
 import { describeError } from '../../client/describeError';
 import { useTheme } from '../../hooks/useTheme';
 

@@ -13,8 +13,15 @@ const CHECK_NAME: Record<string, string> = {
 };
 
 /** The curation checks, as the curator will see them. */
-export function CheckList({ problems, title = 'Curation checks' }: { problems: Array<{ check: string; field: string; message: string }>; title?: string }) {
+export function CheckList({ problems, title = 'Curation checks' }: { problems: Array<{ check: string; field: string; message: string }> | null; title?: string }) {
   const t = useTheme();
+  if (problems === null) {
+    return (
+      <View accessibilityLabel={title} style={[styles.box, { borderColor: t.colours.border, backgroundColor: t.colours.surface, borderRadius: t.radius.md }]}>
+        <Text style={[styles.head, { color: t.colours.textMuted, fontFamily: t.fonts.semibold }]}>{title}: loading the checks…</Text>
+      </View>
+    );
+  }
   return (
     <View accessibilityLabel={title} style={[styles.box, { borderColor: problems.length ? t.colours.caution : t.colours.positive, backgroundColor: t.colours.surface, borderRadius: t.radius.md }]}>
       <Text style={[styles.head, { color: t.colours.text, fontFamily: t.fonts.semibold }]}>

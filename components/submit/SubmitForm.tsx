@@ -4,7 +4,7 @@ import { Controller, useForm, useWatch, type Resolver } from 'react-hook-form';
 import { SubmissionCreateBodySchema } from '../../shared/api/submissions';
 import { SolventSchema } from '../../shared/solvent';
 import type { LibraryEntry } from '../../shared/libraryEntry';
-import { entryCheckAgainstLibrary } from '../../matching/library/entryCheckAgainstLibrary';
+import { useEntryChecks } from '../../hooks/useEntryChecks';
 import { useTheme } from '../../hooks/useTheme';
 import { TextField } from '../ui/TextField';
 import { ChoiceRow } from '../ui/ChoiceRow';
@@ -42,14 +42,9 @@ export function SubmitForm({ library, initial, busy, onSubmit }: SubmitFormProps
   const { control, handleSubmit, formState, reset } = useForm<SubmitValues>({ resolver, defaultValues: initial ?? EMPTY_VALUES, mode: 'onTouched' });
   const values = useWatch({ control }) as SubmitValues;
   const [sentTitle, setSentTitle] = useState<string | null>(null);
-  // The curation checks of matching/library, live as the person types.
-  const problems = useMemo(() => {
-    try {
-      return entryCheckAgainstLibrary(valuesToEntry(values), library);
-    } catch (err) {
-      return [{ check: 'schema' as const, field: 'entry', message: err instanceof Error ? err.message : 'cannot check', entryId: '' }];
-    }
-  }, [values, library]);
+  // The curation checks of matching/library, live as the person types (loaded on first use).
+  const entry = useMemo(() => valuesToEntry(values), [values]);
+  const problems = useEntryChecks(entry, library);
   const e = formState.errors;
 
   const submit = handleSubmit(async (v) => {

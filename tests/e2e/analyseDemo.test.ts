@@ -130,6 +130,41 @@ describe('analyse a demo mixture', () => {
     }
   });
 
+  it('when the browser cannot start a web worker, then the page fetches the engine chunk only then and analyses on its own thread', async () => {
+    const want = expected('demo-01-honey-WV-H-0412');
+    const { page, close } = await openBrowser('phone');
+    try {
+      // The local database runs in a worker of its own; only the analysis worker is refused.
+      await page.addInitScript(() => {
+        const Real = window.Worker;
+        const Refusing = function (this: unknown, url: string | URL, options?: WorkerOptions) {
+          if (/analysis/.test(String(url))) throw new Error('this browser cannot start the analysis worker');
+          return new Real(url, options);
+        } as unknown as typeof Worker;
+        Refusing.prototype = Real.prototype;
+        window.Worker = Refusing;
+      });
+      await signIn(page, server.url, 'analyst@demo.tessera.test');
+      await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      const loaded = () => page.evaluate(() => performance.getEntriesByType('resource').map((e) => e.name));
+      // Signed in and the library shown: neither the worker's engine nor the on-demand chunk yet.
+      expect((await loaded()).some((u) => /\/(analysis|engineOnDemand)-[0-9a-f]+\.js$/.test(u))).toBe(false);
+      await page.goto(`${server.url}/analyse`);
+      await page.getByLabel('Mixture from: demo mixtures').click();
+      await page.getByLabel(`Demo mixture ${want.title}`).click();
+      await page.getByRole('button', { name: 'Run analysis' }).click();
+      await page.getByLabel('Candidates').first().waitFor({ timeout: 90_000 });
+      const scripts = await loaded();
+      expect(scripts.some((u) => /\/engineOnDemand-[0-9a-f]+\.js$/.test(u))).toBe(true);
+      expect(scripts.some((u) => /\/analysis-[0-9a-f]+\.js$/.test(u))).toBe(false);
+      for (const a of want.analytes) {
+        expect(await page.getByLabel(`Candidate ${a.name}`, { exact: true }).innerText()).toContain('confirmed by fit');
+      }
+    } finally {
+      await close();
+    }
+  });
+
   it('when a pasted peak list has bad lines, then each is named and nothing is kept in the history', async () => {
     const { page, close } = await openBrowser('phone');
     try {
