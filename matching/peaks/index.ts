@@ -1,3 +1,4 @@
 export * from './peaksLowerBound';
 export * from './peaksFindInWindow';
 export * from './mixturePeaks';
+export * from './peaksNearestInWindow';

@@ -1,3 +1,4 @@
+import { peaksNearestInWindow } from '../peaks/peaksNearestInWindow';
 import { peaksLowerBound } from '../peaks/peaksLowerBound';
 
 export interface MultipletLines {
@@ -98,7 +99,7 @@ export function multipletsMatchPeaks(
     }
     if (n === 1) {
       // One line (singlet, unresolved multiplet, 13C): the nearest peak, if within the tolerance.
-      const q = nearest(shifts, from, to, L[0]);
+      const q = peaksNearestInWindow(shifts, from, to, L[0]);
       const d = Math.abs(shifts[q] - L[0]);
       if (d <= tol) {
         propM.push(m);
@@ -116,7 +117,7 @@ export function multipletsMatchPeaks(
     let bestOffset = 0;
     // Lines ascend, so the peaks within tol of line l start at a pointer that only moves forward,
     // and for one offset the targets L[k] + offset ascend too: nearest peaks by a moving pointer
-    // (same choice as nearest(), ties to the lower peak) instead of a binary search each.
+    // (same choice as peaksNearestInWindow(), ties to the lower peak) instead of a binary search each.
     let pStart = from;
     for (let l = 0; l < n; l++) {
       while (pStart < to && shifts[pStart] - L[l] < -tol) pStart++;
@@ -150,7 +151,7 @@ export function multipletsMatchPeaks(
     if (bestCover < 0) continue;
     for (let k = 0; k < n; k++) {
       const target = L[k] + bestOffset;
-      const q = nearest(shifts, from, to, target);
+      const q = peaksNearestInWindow(shifts, from, to, target);
       const d = Math.abs(shifts[q] - target);
       if (d <= lineTol && Math.abs(shifts[q] - L[k]) <= tol) {
         propM.push(m);
@@ -276,17 +277,3 @@ function unresolvedBands(
   }
 }
 
-/** Index in [from, to) of the shift closest to v, or −1 for an empty range. */
-function nearest(shifts: ArrayLike<number>, from: number, to: number, v: number): number {
-  if (from >= to) return -1;
-  let lo = from;
-  let hi = to;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (shifts[mid] < v) lo = mid + 1;
-    else hi = mid;
-  }
-  if (lo === to) return to - 1;
-  if (lo === from) return from;
-  return v - shifts[lo - 1] <= shifts[lo] - v ? lo - 1 : lo;
-}

@@ -1,3 +1,4 @@
+import { peaksNearestInWindow } from '../peaks/peaksNearestInWindow';
 import { peaksShiftGridLowerBound, type PeaksShiftGrid } from '../peaks/peaksShiftGrid';
 import type { LibraryIndex } from './libraryIndexBuild';
 
@@ -93,19 +94,6 @@ function growSignals(sc: EntryScoreScratch, signals: number, lines: number): voi
   if (lines > sc.lineTo.length) sc.lineTo = new Int32Array(Math.max(lines, sc.lineTo.length * 2));
 }
 
-/** Index in [from, to) of the shift closest to v (ties to the lower); from < to. */
-function nearest(shifts: Float64Array, from: number, to: number, v: number): number {
-  let lo = from;
-  let hi = to;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (shifts[mid] < v) lo = mid + 1;
-    else hi = mid;
-  }
-  if (lo === to) return to - 1;
-  if (lo === from) return from;
-  return v - shifts[lo - 1] <= shifts[lo] - v ? lo - 1 : lo;
-}
 
 /**
  * The score of indexed entry `e` against the sorted mixture peaks, without building any evidence:
@@ -210,7 +198,7 @@ export function libraryIndexEntryScore(
       continue;
     }
     if (n === 1) {
-      const q = nearest(shifts, from, to, linePpm[ls]);
+      const q = peaksNearestInWindow(shifts, from, to, linePpm[ls]);
       const d = Math.abs(shifts[q] - linePpm[ls]);
       if (d <= tol) {
         growProposals(sc, np + 1);
@@ -232,7 +220,7 @@ export function libraryIndexEntryScore(
     for (let kk = 0; kk < n; kk++) {
       const Lk = linePpm[ls + kk];
       const target = Lk + bestOffset;
-      const q = nearest(shifts, from, to, target);
+      const q = peaksNearestInWindow(shifts, from, to, target);
       const d = Math.abs(shifts[q] - target);
       if (d <= lineTol && Math.abs(shifts[q] - Lk) <= tol) {
         sc.propM[np] = m;
