@@ -1,3 +1,5 @@
+import { peaksLowerBound } from './peaksLowerBound';
+
 /**
  * A direct-address index over ascending peak shifts: the axis is cut into equal cells (about one
  * peak per cell on average), and each cell keeps the first peak at or above it. A lower-bound
@@ -41,21 +43,9 @@ export function peaksShiftGridBuild(shifts: Float64Array): PeaksShiftGrid {
 export function peaksShiftGridLowerBound(grid: PeaksShiftGrid, v: number): number {
   const { shifts, cellFirst } = grid;
   const c = Math.floor((v - grid.origin) * grid.perPpm);
-  if (!(c >= 0)) return v <= grid.origin ? 0 : peaksLowerBoundSlow(shifts, v);
+  if (!(c >= 0)) return v <= grid.origin ? 0 : peaksLowerBound(shifts, v);
   if (c >= cellFirst.length) return shifts.length;
   let i = cellFirst[c];
   while (i < shifts.length && shifts[i] < v) i++;
   return i;
-}
-
-/** Binary search fallback (NaN queries). */
-function peaksLowerBoundSlow(shifts: Float64Array, v: number): number {
-  let lo = 0;
-  let hi = shifts.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (shifts[mid] < v) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }

@@ -213,7 +213,7 @@ export function libraryIndexEntryScore(
     let minGap = Infinity;
     for (let l = 1; l < n; l++) minGap = Math.min(minGap, linePpm[ls + l] - linePpm[ls + l - 1]);
     const lineTol = Math.min(tol, Math.max(1 / index.mhz, 0.3 * minGap));
-    const found = offsetSearch(shifts, from, to, linePpm, lineWeight, ls, n, tol, lineTol, sc);
+    const found = offsetSearch(grid, from, to, linePpm, lineWeight, ls, n, tol, lineTol, sc);
     if (!found) continue;
     const bestOffset = sc.bestOffset;
     growProposals(sc, np + n);
@@ -351,7 +351,7 @@ export function libraryIndexEntryScore(
  * then the smaller |offset|. Writes sc.bestOffset; false when no offset was proposed.
  */
 function offsetSearch(
-  shifts: Float64Array,
+  grid: PeaksShiftGrid,
   from: number,
   to: number,
   linePpm: Float64Array,
@@ -362,6 +362,7 @@ function offsetSearch(
   lineTol: number,
   sc: EntryScoreScratch,
 ): boolean {
+  const shifts = grid.shifts;
   let bestCover = -1;
   let bestMisfit = Infinity;
   let bestOffset = 0;
@@ -377,14 +378,8 @@ function offsetSearch(
       let misfit = 0;
       // Start where the first target falls (every earlier peak lies below it, so the nearest
       // peaks come out as a walk from `from` finds them).
-      const t0 = linePpm[ls] + offset;
-      let ptr = from;
-      let hiP = to;
-      while (ptr < hiP) {
-        const mid = (ptr + hiP) >>> 1;
-        if (shifts[mid] < t0) ptr = mid + 1;
-        else hiP = mid;
-      }
+      const first = peaksShiftGridLowerBound(grid, linePpm[ls] + offset);
+      let ptr = first < from ? from : first > to ? to : first;
       let left = 1;
       let kk = 0;
       for (; kk < n; kk++) {
