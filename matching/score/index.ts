@@ -1,3 +1,4 @@
 export * from './entryScore';
 export * from './multipletsMatchPeaks';
 export * from './signalToMultipletLines';
+export * from './multipletOffsetBetter';

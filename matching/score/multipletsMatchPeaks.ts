@@ -1,3 +1,4 @@
+import { multipletOffsetBetter } from './multipletOffsetBetter';
 import { peaksNearestInWindow } from '../peaks/peaksNearestInWindow';
 import { peaksLowerBound } from '../peaks/peaksLowerBound';
 
@@ -138,10 +139,7 @@ export function multipletsMatchPeaks(
             misfit += d;
           }
         }
-        const better =
-          cover > bestCover + 1e-12 ||
-          (Math.abs(cover - bestCover) <= 1e-12 && (misfit < bestMisfit - 1e-15 || (Math.abs(misfit - bestMisfit) <= 1e-15 && Math.abs(offset) < Math.abs(bestOffset))));
-        if (better) {
+        if (multipletOffsetBetter(cover, misfit, offset, bestCover, bestMisfit, bestOffset)) {
           bestCover = cover;
           bestMisfit = misfit;
           bestOffset = offset;

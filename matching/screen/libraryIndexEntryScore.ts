@@ -1,3 +1,4 @@
+import { multipletOffsetBetter } from '../score/multipletOffsetBetter';
 import { peaksNearestInWindow } from '../peaks/peaksNearestInWindow';
 import { peaksShiftGridLowerBound, type PeaksShiftGrid } from '../peaks/peaksShiftGrid';
 import type { LibraryIndex } from './libraryIndexBuild';
@@ -398,10 +399,7 @@ function offsetSearch(
         }
       }
       if (kk < n) continue;
-      const better =
-        cover > bestCover + 1e-12 ||
-        (Math.abs(cover - bestCover) <= 1e-12 && (misfit < bestMisfit - 1e-15 || (Math.abs(misfit - bestMisfit) <= 1e-15 && Math.abs(offset) < Math.abs(bestOffset))));
-      if (better) {
+      if (multipletOffsetBetter(cover, misfit, offset, bestCover, bestMisfit, bestOffset)) {
         bestCover = cover;
         bestMisfit = misfit;
         bestOffset = offset;
