@@ -83,7 +83,7 @@ export function BatchPanel() {
         <Button
           label="Demo mixtures in this solvent"
           variant="quiet"
-          onPress={() => setFiles(DEMO_MIXTURES.filter((d) => d.solvent === solvent).map((d) => ({ name: d.fileName, content: d.content, demo: true, title: d.title })))}
+          onPress={() => setFiles(DEMO_MIXTURES.filter((d) => d.solvent === solvent && d.content !== null).map((d) => ({ name: d.fileName, content: d.content!, demo: true, title: d.title })))}
         />
       </View>
       <Text accessibilityLabel="Batch files" style={[styles.small, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>

@@ -11,7 +11,7 @@ import { ChoiceRow } from '../ui/ChoiceRow';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { pickTextFiles, type PickedFile } from '../pickTextFiles';
-import { DEMO_MIXTURES } from '../demoMixtures';
+import { DEMO_MIXTURES, demoMixtureContent } from '../demoMixtures';
 
 type Source = 'paste' | 'file' | 'demo';
 
@@ -44,6 +44,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
   const [stdConc, setStdConc] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [pickError, setPickError] = useState<string | null>(null);
+  const [loadingDemo, setLoadingDemo] = useState(false);
 
   const standards = useMemo(() => library.filter((e) => e.category === 'reference' && e.solvent === solvent), [library, solvent]);
   const demo = DEMO_MIXTURES.find((d) => d.key === demoKey) ?? null;
@@ -52,7 +53,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
     const d = DEMO_MIXTURES.find((x) => x.key === key);
     setDemoKey(key);
     if (!d) return;
-    // Demo peak lists are 1H; their sample sheet gives solvent, frequency and standard.
+    // The demo files are 1H; their sample sheet gives solvent, frequency and standard.
     setNucleus('1H');
     setTol(String(DEFAULT_TOLERANCE_PPM['1H']));
     setSolvent(d.solvent);
@@ -86,7 +87,12 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
     if (Object.keys(e).length) return;
     const settings = { nucleus, solvent, mhz: m!, tolerancePpm: tp!, standard: stdId !== 'none' ? { entryId: stdId, concentrationMM: c! } : null };
     if (source === 'demo' && demo) {
-      onRun({ fileName: demo.fileName, content: demo.content, name: demo.title, demo: true, settings });
+      // A demo spectrum's text comes in a chunk of its own, on first use.
+      setLoadingDemo(true);
+      demoMixtureContent(demo)
+        .then((content) => onRun({ fileName: demo.fileName, content, name: demo.title, demo: true, settings }))
+        .catch((err: unknown) => setErrors({ demo: `The demo file could not be loaded: ${err instanceof Error ? err.message : String(err)}` }))
+        .finally(() => setLoadingDemo(false));
     } else if (source === 'file' && file) {
       onRun({ fileName: file.name, content: file.content, name: name.trim() || undefined, settings });
     } else {
@@ -172,7 +178,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
       />
       {stdId !== 'none' ? <TextField label="Standard concentration (mmol/L)" keyboardType="decimal-pad" value={stdConc} onChangeText={setStdConc} error={errors.std} /> : null}
       {status}
-      <Button label="Run analysis" busy={busy} onPress={run} />
+      <Button label="Run analysis" busy={busy || loadingDemo} onPress={run} />
     </View>
   );
 }

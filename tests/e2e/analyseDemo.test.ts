@@ -6,7 +6,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type RunningServer } from './support/server';
 import { openBrowser, overflowsHorizontally, screenshot, signIn, type ViewportName } from './support/browser';
-import { DEMO_DIR, MODULE_PATH, demoManifest, demoMixturesModuleText } from './support/demoMixturesModule';
+import { DEMO_DIR, MODULE_PATH, SPECTRA_MODULE_PATH, demoManifest, demoMixturesModuleText, demoSpectraModuleText } from './support/demoMixturesModule';
 
 interface Component {
   entryId: string;
@@ -39,8 +39,9 @@ describe('analyse a demo mixture', () => {
     await server?.stop();
   });
 
-  it('the bundled demo peak lists are the ones in library-data (regenerate with writeDemoMixturesModule.ts)', () => {
+  it('the bundled demo peak lists and spectra are the ones in library-data (regenerate with writeDemoMixturesModule.ts)', () => {
     expect(fs.readFileSync(MODULE_PATH, 'utf8')).toBe(demoMixturesModuleText());
+    expect(fs.readFileSync(SPECTRA_MODULE_PATH, 'utf8')).toBe(demoSpectraModuleText());
   });
 
   it.each(CASES)('when the analyst analyses $mixture at $viewport size, then its compounds rank at the top with their amounts', async ({ viewport, mixture }) => {
@@ -55,7 +56,7 @@ describe('analyse a demo mixture', () => {
       await expect.poll(() => page.getByText(/offline or the server is down/).count(), { timeout: 15_000 }).toBeGreaterThan(0);
       await page.goto(`${server.url}/analyse`);
       await page.getByLabel('Mixture from: demo mixtures').click();
-      await page.getByLabel(`Demo mixture ${want.title}`).click();
+      await page.getByLabel(`Demo mixture ${want.title}`, { exact: true }).click();
       await screenshot(page, `analyse-${viewport}`);
       await page.getByRole('button', { name: 'Run analysis' }).click();
       await page.getByLabel('Candidates').first().waitFor({ timeout: 90_000 });
@@ -151,7 +152,7 @@ describe('analyse a demo mixture', () => {
       expect((await loaded()).some((u) => /\/(analysis|engineOnDemand)-[0-9a-f]+\.js$/.test(u))).toBe(false);
       await page.goto(`${server.url}/analyse`);
       await page.getByLabel('Mixture from: demo mixtures').click();
-      await page.getByLabel(`Demo mixture ${want.title}`).click();
+      await page.getByLabel(`Demo mixture ${want.title}`, { exact: true }).click();
       await page.getByRole('button', { name: 'Run analysis' }).click();
       await page.getByLabel('Candidates').first().waitFor({ timeout: 90_000 });
       const scripts = await loaded();
@@ -160,6 +161,31 @@ describe('analyse a demo mixture', () => {
       for (const a of want.analytes) {
         expect(await page.getByLabel(`Candidate ${a.name}`, { exact: true }).innerText()).toContain('confirmed by fit');
       }
+    } finally {
+      await close();
+    }
+  });
+
+  it('when the analyst picks a demo spectrum, then its text is fetched on demand and the analysis names its analytes', async () => {
+    const m = demoManifest().mixtures.find((x) => x.files.spectrum);
+    expect(m, 'a demo mixture with a spectrum').toBeDefined();
+    const want = expected(m!.id);
+    const { page, close } = await openBrowser('wide');
+    try {
+      await signIn(page, server.url, 'analyst@demo.tessera.test');
+      await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
+      await page.goto(`${server.url}/analyse`);
+      await page.getByLabel('Mixture from: demo mixtures').click();
+      const loaded = () => page.evaluate(() => performance.getEntriesByType('resource').map((e) => e.name));
+      expect((await loaded()).some((u) => /\/demoSpectrumFiles-[0-9a-f]+\.js$/.test(u))).toBe(false);
+      await page.getByLabel(`Demo mixture ${want.title} (spectrum)`, { exact: true }).click();
+      await page.getByRole('button', { name: 'Run analysis' }).click();
+      await page.getByLabel('Candidates').first().waitFor({ timeout: 90_000 });
+      expect((await loaded()).some((u) => /\/demoSpectrumFiles-[0-9a-f]+\.js$/.test(u))).toBe(true);
+      for (const a of want.analytes) {
+        expect(await page.getByLabel(`Candidate ${a.name}`, { exact: true }).innerText(), a.name).toContain('confirmed by fit');
+      }
+      await screenshot(page, 'result-demo-spectrum-wide');
     } finally {
       await close();
     }
