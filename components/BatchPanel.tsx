@@ -3,6 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { Link } from 'expo-router';
 import { SolventSchema, type Solvent } from '../shared/solvent';
 import { DEFAULT_TOLERANCE_PPM } from '../shared/nucleus';
+import { SPECTROMETER_MHZ_RANGE } from '../shared/spectrometer';
 import { useRunBatchMutation } from '../queries/analyses';
 import { batchSummary, batchToCsv } from '../client/batchSummary';
 import { describeError } from '../client/describeError';
@@ -63,8 +64,10 @@ export function BatchPanel() {
     [summary, t],
   );
 
+  const mhzNumber = mhz.trim() === '' ? NaN : Number(mhz.replace(',', '.'));
+  const mhzOk = mhzNumber >= SPECTROMETER_MHZ_RANGE[0] && mhzNumber <= SPECTROMETER_MHZ_RANGE[1];
   const run = () => {
-    const m = Number(mhz);
+    const m = mhzNumber;
     batch.mutate(
       files.map((f) => ({
         fileName: f.name,
@@ -90,8 +93,8 @@ export function BatchPanel() {
         {files.length ? `${files.length} files: ${files.map((f) => f.name).join(', ')}` : 'No files chosen. Every file is read as a 1H mixture with the settings below.'}
       </Text>
       <ChoiceRow label="Solvent of the run" value={solvent} onChange={(v) => setSolvent(v as Solvent)} options={SolventSchema.options.map((s) => ({ value: s, text: s }))} />
-      <TextField label="Spectrometer (MHz)" keyboardType="decimal-pad" value={mhz} onChangeText={setMhz} />
-      <Button label="Run the batch" busy={batch.isPending} disabled={files.length === 0 || !(Number(mhz) > 0)} onPress={run} />
+      <TextField label="Spectrometer (MHz)" keyboardType="decimal-pad" value={mhz} onChangeText={setMhz} error={mhzOk ? null : `Give the 1H frequency in MHz, between ${SPECTROMETER_MHZ_RANGE[0]} and ${SPECTROMETER_MHZ_RANGE[1]}.`} />
+      <Button label="Run the batch" busy={batch.isPending} disabled={files.length === 0 || !mhzOk} onPress={run} />
       {batch.isPending ? <Notice text={`Analysed ${batch.done} of ${files.length}…`} /> : null}
       {summary ? (
         <>

@@ -9,6 +9,7 @@ import path from 'node:path';
 import { z } from 'zod';
 import { LibraryFileSchema, type LibraryEntry } from '../shared/libraryEntry';
 import { SolventSchema, ShiftReferenceSchema } from '../shared/solvent';
+import { SpectrometerMhzSchema } from '../shared/spectrometer';
 import { entryToLines } from '../matching/multiplets';
 import { lorentzianUnitArea } from '../matching/lineshape';
 import { spectrumPickPeaks } from '../matching/spectrum';
@@ -29,7 +30,7 @@ export const DemoMixtureSpecSchema = z.object({
   hardCases: z.array(z.string()),
   solvent: SolventSchema,
   reference: ShiftReferenceSchema,
-  mhz: z.number().positive().max(2000),
+  mhz: SpectrometerMhzSchema,
   linewidthHz: z.number().positive().max(20),
   ppmRange: z.tuple([z.number(), z.number()]),
   points: z.number().int().min(256).max(262144),

@@ -1,11 +1,12 @@
 import { z } from 'zod';
 import { ScreenOptionsSchema } from './screening';
+import { LineWidthHzSchema } from './spectrometer';
 
 const finite = z.number().finite();
 
 /** Options of the overlay fit. Defaults are applied by the engine when it unpacks them. */
 export const FitOptionsSchema = z.object({
-  linewidthHz: z.number().positive().max(100).optional().describe('FWHM of every simulated line, Hz; default: estimated from the mixture'),
+  linewidthHz: LineWidthHzSchema.optional().describe('FWHM of every simulated line, Hz; default: estimated from the mixture'),
   tolerancePpm: z.number().nonnegative().max(1).optional().describe('largest common shift offset per candidate, ppm; default DEFAULT_TOLERANCE_PPM of the nucleus'),
   refineShifts: z.boolean().optional().describe('search a common shift offset per candidate (default true)'),
   minShare: z.number().min(0).max(1).optional().describe('candidates explaining less than this share of the mixture intensity are rejected (default 0.002)'),

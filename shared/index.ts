@@ -1,4 +1,5 @@
 export * from './nucleus';
+export * from './spectrometer';
 export * from './solvent';
 export * from './multiplicity';
 export * from './libraryEntry';

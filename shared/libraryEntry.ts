@@ -1,20 +1,20 @@
 import { z } from 'zod';
 import { multiplicityNeighbours, MultiplicitySchema } from './multiplicity';
 import { SolventSchema } from './solvent';
-
-const finite = z.number().finite();
+import { ShiftPpmSchema } from './nucleus';
+import { LineWidthHzSchema, MAX_COUPLING_HZ, SpectrometerMhzSchema } from './spectrometer';
 
 /** One 1H multiplet: centre shift, first-order multiplicity, couplings (Hz), nuclei count. */
 export const Signal1HSchema = z
   .object({
     nucleus: z.literal('1H'),
-    shift: finite.describe('centre chemical shift δ, ppm'),
+    shift: ShiftPpmSchema.describe('centre chemical shift δ, ppm'),
     multiplicity: MultiplicitySchema,
-    j: z.array(z.number().finite().positive()).default([]).describe('coupling constants, Hz, one per splitting letter'),
+    j: z.array(z.number().finite().positive().max(MAX_COUPLING_HZ, `a coupling constant must be at most ${MAX_COUPLING_HZ} Hz`)).default([]).describe('coupling constants, Hz, one per splitting letter'),
     nuclei: z.number().int().positive().describe('number of equivalent nuclei in the signal'),
     label: z.string().max(40).optional().describe('group label, e.g. "CH3"'),
     exchangeable: z.boolean().optional().describe('OH/NH: position varies, may be absent'),
-    widthHz: z.number().positive().max(100).optional().describe('natural line width (FWHM) if known, Hz'),
+    widthHz: LineWidthHzSchema.max(100, 'a natural line width must be at most 100 Hz').optional().describe('natural line width (FWHM) if known, Hz'),
   })
   .superRefine((s, ctx) => {
     let neighbours: number[] | null;
@@ -39,7 +39,7 @@ export type CarbonType = z.infer<typeof CarbonTypeSchema>;
 /** One 13C signal (proton-decoupled): shift and optional carbon type as DEPT gives it. */
 export const Signal13CSchema = z.object({
   nucleus: z.literal('13C'),
-  shift: finite.describe('chemical shift δ, ppm'),
+  shift: ShiftPpmSchema.describe('chemical shift δ, ppm'),
   carbonType: CarbonTypeSchema.optional(),
   nuclei: z.number().int().positive().default(1).describe('number of equivalent carbons'),
   label: z.string().max(40).optional(),
@@ -62,7 +62,7 @@ export const LibraryEntrySchema = z.object({
   category: EntryCategorySchema,
   source: z.string().trim().min(1).describe('citation (author, journal, year, table) or submitter'),
   solvent: SolventSchema,
-  mhz: z.number().positive().max(2000).describe('spectrometer 1H frequency the data were recorded at, MHz'),
+  mhz: SpectrometerMhzSchema.describe('spectrometer 1H frequency the data were recorded at, MHz'),
   temperatureC: z.number().min(-150).max(200).optional(),
   pH: z.number().min(-2).max(16).optional(),
   signals: z.array(SignalSchema).min(1, 'an entry needs at least one signal'),

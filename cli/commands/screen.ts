@@ -9,6 +9,7 @@ import { LibraryFileSchema, type LibraryEntry } from '../../shared/libraryEntry'
 import { NucleusSchema } from '../../shared/nucleus';
 import type { ScreenOptions, ScreenResult } from '../../shared/screening';
 import { SolventSchema } from '../../shared/solvent';
+import { SPECTROMETER_MHZ_RANGE } from '../../shared/spectrometer';
 import type { CliCommand } from './index';
 
 /** Peak lists rarely say their field strength; multiplet line spacing is all it changes. */
@@ -77,7 +78,7 @@ export function screenSettings(values: { solvent?: string; nucleus?: string; mhz
     if (!n.success) throw new UsageError(`--nucleus must be one of ${NucleusSchema.options.join(', ')}, got "${values.nucleus}"`);
     meta.nucleus = n.data;
   }
-  meta.mhz = cliNumber('mhz', values.mhz, (v) => v > 0 && v <= 2000, 'a frequency in MHz between 0 and 2000');
+  meta.mhz = cliNumber('mhz', values.mhz, (v) => v >= SPECTROMETER_MHZ_RANGE[0] && v <= SPECTROMETER_MHZ_RANGE[1], `the 1H frequency in MHz, between ${SPECTROMETER_MHZ_RANGE[0]} and ${SPECTROMETER_MHZ_RANGE[1]}`);
   if (meta.mhz === undefined) delete meta.mhz;
   const options: ScreenOptions = {};
   const tol = cliNumber('tolerance', values.tolerance, (v) => v > 0 && v <= 10, 'a positive number of ppm (at most 10)');

@@ -3,6 +3,7 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { SolventSchema, type Solvent } from '../../shared/solvent';
 import { DEFAULT_TOLERANCE_PPM, type Nucleus } from '../../shared/nucleus';
+import { SPECTROMETER_MHZ_RANGE } from '../../shared/spectrometer';
 import type { LibraryEntry } from '../../shared/libraryEntry';
 import type { AnalysisInput } from '../../client/analysisRun';
 import { useTheme } from '../../hooks/useTheme';
@@ -77,7 +78,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
     const m = numberOrNull(mhz);
     const tp = numberOrNull(tol);
     const c = numberOrNull(stdConc);
-    if (m === null || m <= 0 || m > 2000) e.mhz = 'Spectrometer frequency: give a number of MHz between 1 and 2000.';
+    if (m === null || m < SPECTROMETER_MHZ_RANGE[0] || m > SPECTROMETER_MHZ_RANGE[1]) e.mhz = `Spectrometer frequency: give the 1H frequency in MHz, between ${SPECTROMETER_MHZ_RANGE[0]} and ${SPECTROMETER_MHZ_RANGE[1]}.`;
     if (tp === null || tp <= 0 || tp > 1) e.tol = 'Tolerance: give a positive number of ppm, at most 1.';
     if (stdId !== 'none' && (c === null || c <= 0)) e.std = 'Internal standard concentration: give a positive number of mmol/L.';
     if (source === 'paste' && !text.trim()) e.text = 'Peak list: paste at least one line "shift, intensity".';

@@ -3,6 +3,7 @@ import type { InputIssue } from '../../shared/inputIssue';
 import { IntensityKindSchema } from '../../shared/mixture';
 import { NucleusSchema } from '../../shared/nucleus';
 import { ShiftReferenceSchema, SolventSchema } from '../../shared/solvent';
+import { SpectrometerMhzSchema } from '../../shared/spectrometer';
 
 /** What an importer is told about a mixture besides its data (a file may also say some of it). */
 export const MixtureMetaSchema = z.object({
@@ -10,7 +11,7 @@ export const MixtureMetaSchema = z.object({
   name: z.string().trim().min(1).optional(),
   nucleus: NucleusSchema.optional(),
   solvent: SolventSchema.optional(),
-  mhz: z.number().positive().max(2000).optional(),
+  mhz: SpectrometerMhzSchema.optional(),
   reference: ShiftReferenceSchema.optional(),
   intensityKind: IntensityKindSchema.optional(),
   demo: z.boolean().optional(),

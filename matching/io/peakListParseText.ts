@@ -1,6 +1,7 @@
 import type { InputIssue } from '../../shared/inputIssue';
 import { PeakListMixtureSchema, type PeakListMixture } from '../../shared/mixture';
 import { USUAL_SHIFT_RANGE_PPM } from '../../shared/nucleus';
+import { LINE_WIDTH_HZ_RANGE } from '../../shared/spectrometer';
 import { InputError } from './InputError';
 import { mixtureMetaParse, type MixtureMeta } from './mixtureMetaParse';
 import { textCommentMeta } from './textCommentMeta';
@@ -84,7 +85,7 @@ export function peakListParseText(text: string, meta: MixtureMeta = {}): PeakLis
     const w = col.width !== undefined && row.fields[col.width] !== '' ? read('width') : undefined;
     if (shift !== null && (shift < lo || shift > hi)) problems.push({ line: row.line, field: 'shift', message: `shift ${shift} ppm is outside the usual ${nucleus} range (${lo} to ${hi} ppm)` });
     if (intensity !== null && intensity < 0) problems.push({ line: row.line, field: 'intensity', message: `intensity must be ≥ 0, got ${intensity}` });
-    if (w !== undefined && w !== null && !(w > 0 && w <= 1000)) problems.push({ line: row.line, field: 'width', message: `width must be between 0 and 1000 Hz, got ${w}` });
+    if (w !== undefined && w !== null && !(w >= LINE_WIDTH_HZ_RANGE[0] && w <= LINE_WIDTH_HZ_RANGE[1])) problems.push({ line: row.line, field: 'width', message: `width must be between ${LINE_WIDTH_HZ_RANGE[0]} and ${LINE_WIDTH_HZ_RANGE[1]} Hz, got ${w}` });
     if (problems.length === before) peaks.push({ shift: shift!, intensity: intensity!, ...(w !== undefined && w !== null ? { widthHz: w } : {}) });
   }
   if (problems.length > 0) throw new InputError('peak list', problems);

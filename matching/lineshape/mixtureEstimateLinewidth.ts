@@ -1,4 +1,5 @@
 import type { Mixture } from '../../shared/mixture';
+import { LINE_WIDTH_HZ_RANGE } from '../../shared/spectrometer';
 import { nucleusFrequency } from './nucleusFrequency';
 
 /** Linewidth used when neither the user nor the mixture gives one: 1 Hz (common practice: 0.5–2 Hz). */
@@ -18,7 +19,8 @@ function median(values: number[]): number {
 /**
  * Linewidth (FWHM, Hz) of the mixture: the median of the peak widths of a peak list, or for a
  * spectrum the median width of the tallest maxima, each from the parabola that 1/intensity
- * follows near a Lorentzian maximum (the maximum and two points near half height). Falls back to DEFAULT_LINEWIDTH_HZ.
+ * follows near a Lorentzian maximum (the maximum and two points near half height), kept within
+ * LINE_WIDTH_HZ_RANGE. Falls back to DEFAULT_LINEWIDTH_HZ.
  */
 export function mixtureEstimateLinewidth(mixture: Mixture): LinewidthEstimate {
   const mhz = nucleusFrequency(mixture.nucleus, mixture.mhz);
@@ -57,5 +59,7 @@ export function mixtureEstimateLinewidth(mixture: Mixture): LinewidthEstimate {
     const w = gamma * mhz;
     if (w > 0 && Number.isFinite(w)) widths.push(w);
   }
-  return widths.length ? { widthHz: median(widths), source: 'mixture' } : { widthHz: DEFAULT_LINEWIDTH_HZ, source: 'default' };
+  // A spectrum sampled far finer or coarser than its lines still gets a width a line can have.
+  const [lo, hi] = LINE_WIDTH_HZ_RANGE;
+  return widths.length ? { widthHz: Math.min(hi, Math.max(lo, median(widths))), source: 'mixture' } : { widthHz: DEFAULT_LINEWIDTH_HZ, source: 'default' };
 }

@@ -30,11 +30,12 @@ export function fitToAmounts(fit: FitResult, standard?: InternalStandard, option
     if (inFractions && total > 0) {
       moleFraction = c.amountPerNucleus / total;
       if (analytes.every((a) => a.amountUncertainty !== null)) {
-        // ∂x_i/∂a_j = (δ_ij·S − a_i)/S²
+        // ∂x_i/∂a_j = (δ_ij·S − a_i)/S² = (δ_ij − x_i)/S; σ_j/S is formed first so that no
+        // power of S under- or overflows whatever the intensity unit.
         let v = 0;
         for (const a of analytes) {
-          const d = ((a === c ? total : 0) - c.amountPerNucleus) / (total * total);
-          v += d * d * a.amountUncertainty! ** 2;
+          const t = ((a === c ? 1 : 0) - moleFraction) * (a.amountUncertainty! / total);
+          v += t * t;
         }
         moleFractionUncertainty = Math.sqrt(v);
       }

@@ -116,6 +116,18 @@ describe('submission lifecycle', () => {
     expect(res.body.error.details.issues[0].field).toBe('entry.id');
   });
 
+  // The write-route property test found a 5e-324 MHz entry that passed validation and broke the
+  // curation checks (500); the frequency now has the bounds of a real spectrometer.
+  it('when a submission states a spectrometer frequency no instrument has, then 400 names entry.mhz and nothing is stored', async () => {
+    const before = await s.ds.query('SELECT COUNT(*) AS n FROM submission');
+    for (const mhz of [5e-324, 0.5, 2500]) {
+      const res = await request(s.app).post('/api/submissions').set(auth(analyst)).send({ entry: demoEntry(`demo.bad-mhz-${String(mhz).replace(/[^0-9]/g, '')}`, { mhz }) });
+      expect(res.status, JSON.stringify(res.body)).toBe(400);
+      expect(res.body.error.details.issues.map((i: { field: string }) => i.field)).toEqual(['entry.mhz']);
+    }
+    expect(await s.ds.query('SELECT COUNT(*) AS n FROM submission')).toEqual(before);
+  });
+
   it('when a student submits, then the submission is marked student work', async () => {
     const res = await request(s.app).post('/api/submissions').set(auth(student)).send({ entry: demoEntry('demo.student-try', { studentWork: false }) });
     expect(res.status).toBe(201);

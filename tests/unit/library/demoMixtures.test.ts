@@ -56,7 +56,7 @@ describe('demo mixtures', () => {
   it('refuse a recipe with a bad field, naming mixture and field', () => {
     const recipes = JSON.parse(fs.readFileSync(path.join(DIR, 'recipes.json'), 'utf8'));
     recipes.mixtures[1].mhz = -400;
-    expect(() => readRecipes(JSON.stringify(recipes))).toThrow('recipes.json: mixtures[1].mhz: Too small: expected number to be >0');
+    expect(() => readRecipes(JSON.stringify(recipes))).toThrow('recipes.json: mixtures[1].mhz: spectrometer frequency must be at least 10 MHz');
   });
 
   describe.each(manifest.mixtures.filter((m) => m.components.some((c) => c.role === 'analyte')).map((m) => [m.id, m] as const))('%s', (_id, m) => {

@@ -10,7 +10,7 @@ describe('entryCheckSchema', () => {
   it('reports each bad field with its path', () => {
     const raw = { ...ethanolEntry(), mhz: -5, signals: [{ nucleus: '1H', shift: 1.25, multiplicity: 't', j: [], nuclei: 3 }] };
     expect(entryCheckSchema(raw)).toEqual([
-      { entryId: 'test:ethanol', field: 'mhz', check: 'schema', message: 'Too small: expected number to be >0' },
+      { entryId: 'test:ethanol', field: 'mhz', check: 'schema', message: 'spectrometer frequency must be at least 10 MHz (the 1H frequency, e.g. 60 or 400)' },
       { entryId: 'test:ethanol', field: 'signals[0].j', check: 'schema', message: 'multiplicity "t" needs 1 coupling constant(s), got 0' },
     ]);
   });
