@@ -14,12 +14,14 @@ export const FitOptionsSchema = z.object({
   noiseLevel: z.number().positive().optional().describe('RMS noise of the mixture intensities; default: estimated (spectra) or unknown (peak lists)'),
   unexplainedFraction: z.number().min(0).max(1).optional().describe('a mixture peak is unexplained when the fit reaches less than this fraction of it (default 0.5)'),
   minCoverage: z.number().min(0).max(1).optional().describe('candidates whose nuclei the mixture supports less than this share of are rejected (default 0: off — on picked peak lists a true compound can fall below 0.5)'),
+  ownLineRequired: z.boolean().optional().describe('reject a candidate with no supported line at least a linewidth from every other fitted line (default: true for peak lists, false for spectra — a picked list keeps no line shapes, so intensity under another compound\'s line is no evidence there)'),
+  lookAlikes: z.array(z.array(z.string())).optional().describe('sets of entry ids said to be alike (near duplicates, screening ambiguity groups): a member sharing its lines with a fitted member of its set is kept and reported with it, not rejected for want of an own line'),
   curves: z.boolean().optional().describe('return the axis and curves (default true; false leaves them empty, e.g. for decoy fits)'),
   includeExchangeable: z.boolean().optional().describe('simulate OH/NH signals marked exchangeable too (default false: their position and width vary)'),
 });
 export type FitOptions = z.infer<typeof FitOptionsSchema>;
 
-export const RejectionReasonSchema = z.enum(['zero-amount', 'below-share', 'below-detection', 'missing-signals', 'no-lines']);
+export const RejectionReasonSchema = z.enum(['zero-amount', 'below-share', 'below-detection', 'missing-signals', 'no-own-line', 'no-lines']);
 export type RejectionReason = z.infer<typeof RejectionReasonSchema>;
 
 /** One candidate kept by the fit. Amounts are per nucleus, so they compare as mole ratios. */

@@ -29,8 +29,13 @@ function screenAndFit(mixture: Mixture, entries: LibraryEntry[], options: Analys
   const screen = screenMixture(mixture, entries, options.screen ?? {});
   const byId = new Map(entries.map((e) => [e.id, e]));
   const ids = [...new Set([...screen.candidates.map((c) => c.entryId), ...forced.filter((id) => byId.has(id))])];
+  // Look-alikes among the candidates (screening ambiguity groups, library near duplicates) are
+  // reported together when the fit cannot tell them apart, so it keeps both.
+  const lookAlikes: string[][] = screen.ambiguityGroups.map((g) => g.members);
+  for (const id of ids) for (const other of byId.get(id)!.nearDuplicateOf ?? []) lookAlikes.push([id, other]);
   const fit = fitMixture(mixture, ids.map((id) => byId.get(id)!), {
     tolerancePpm: screen.tolerancePpm,
+    lookAlikes,
     ...options.fit,
     ...(linewidthHz !== undefined ? { linewidthHz } : {}),
     curves,

@@ -9,6 +9,7 @@ import { fitDesignPeaks } from './fitDesignPeaks';
 import { fitDesignSpectrum } from './fitDesignSpectrum';
 import { fitCoverage } from './fitCoverage';
 import { fitEvidence } from './fitEvidence';
+import { fitOwnLines } from './fitOwnLines';
 import { fitNormalEquations } from './fitNormalEquations';
 import { fitSearchOffsets } from './fitSearchOffsets';
 import { shiftLines, toPlainArray, type FitDesign, type FitLine } from './fitTypes';
@@ -73,6 +74,8 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     includeExchangeable = false,
     curves: withCurves = true,
     minCoverage = 0,
+    ownLineRequired = mixture.kind === 'peaks',
+    lookAlikes = [],
   } = parsed.data;
   const freq = nucleusFrequency(nucleus, mixture.mhz);
   const estimate = parsed.data.linewidthHz === undefined ? mixtureEstimateLinewidth(mixture) : null;
@@ -223,35 +226,75 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   // supports less than minCoverage is dropped (worst first, one at a time) and the rest refitted.
   // Off by default: picked peak lists lose weak and merged lines, and true compounds then fall
   // below 0.5 (counting supported lines instead fails the same way).
+  // And it shows one line of its own (ownLineRequired): a candidate all of whose supported lines
+  // lie within a linewidth of other fitted compounds' lines only takes up what their model leaves
+  // over; on a picked peak list that is misfit, not evidence. The smallest such candidate is
+  // dropped first and the rest refitted, until every one left has an own line. Lines shared only
+  // with a fitted look-alike count as its own: the report names such a pair as one set instead.
   const excluded = new Set<number>();
   const missing: RejectedCandidate[] = [];
   let fitRejections: RejectedCandidate[] = [];
   let active: number[] = [];
+  const lookAlikeOf = new Map<string, Set<string>>();
+  for (const set of lookAlikes) for (const id of set) for (const other of set) if (other !== id) lookAlikeOf.set(id, (lookAlikeOf.get(id) ?? new Set()).add(other));
   for (let round = 0; round <= kept.length; round++) {
     fitRejections = [];
     active = solveAndReject(design, fitRejections, excluded);
-    if (minCoverage <= 0 || active.length === 0) break;
+    if (active.length === 0) break;
     const cur = active.map((i) => current[i]);
-    const sigs = signalsOf(current);
-    let worst = -1;
-    let worstCoverage = Infinity;
-    active.forEach((i, a) => {
-      const cov = fitCoverage(rough(), c, cur, sigs[i], a);
-      if (cov < worstCoverage) {
-        worstCoverage = cov;
-        worst = a;
+    if (minCoverage > 0) {
+      const sigs = signalsOf(current);
+      let worst = -1;
+      let worstCoverage = Infinity;
+      active.forEach((i, a) => {
+        const cov = fitCoverage(rough(), c, cur, sigs[i], a);
+        if (cov < worstCoverage) {
+          worstCoverage = cov;
+          worst = a;
+        }
+      });
+      if (worstCoverage < minCoverage) {
+        const i = active[worst];
+        excluded.add(i);
+        missing.push({
+          entryId: kept[i].entry.id,
+          name: kept[i].entry.name,
+          reason: 'missing-signals',
+          message: `the mixture supports only ${(worstCoverage * 100).toFixed(0)} % of its nuclei, below the ${(minCoverage * 100).toFixed(0)} % needed`,
+          share: 0,
+        });
+        continue;
       }
-    });
-    if (worstCoverage >= minCoverage) break;
-    const i = active[worst];
-    excluded.add(i);
-    missing.push({
-      entryId: kept[i].entry.id,
-      name: kept[i].entry.name,
-      reason: 'missing-signals',
-      message: `the mixture supports only ${(worstCoverage * 100).toFixed(0)} % of its nuclei, below the ${(minCoverage * 100).toFixed(0)} % needed`,
-      share: 0,
-    });
+    }
+    if (ownLineRequired && active.length > 1) {
+      let weakest = -1;
+      let weakestAmount = Infinity;
+      active.forEach((i, a) => {
+        const alike = lookAlikeOf.get(kept[i].entry.id);
+        const ignore = new Set<number>();
+        if (alike) active.forEach((k, b) => alike.has(kept[k].entry.id) && ignore.add(b));
+        if (fitOwnLines(design, c, cur, a, ignore).distinctLines > 0) return;
+        const amount = c[a] * design.modelIntensity(cur[a]);
+        if (amount < weakestAmount) {
+          weakestAmount = amount;
+          weakest = a;
+        }
+      });
+      if (weakest >= 0) {
+        const i = active[weakest];
+        const explained = active.reduce((sum, k, a) => sum + c[a] * design.modelIntensity(current[k]), 0);
+        excluded.add(i);
+        missing.push({
+          entryId: kept[i].entry.id,
+          name: kept[i].entry.name,
+          reason: 'no-own-line',
+          message: 'none of its lines stands a linewidth clear of the other fitted compounds’ lines with the mixture behind it: the data give it no evidence of its own (it may still be present, hidden under them)',
+          share: Math.min(1, weakestAmount / Math.max(design.totalIntensity, explained)),
+        });
+        continue;
+      }
+    }
+    break;
   }
   rejected.push(...missing, ...fitRejections);
 

@@ -11,9 +11,11 @@ import path from 'node:path';
 /**
  * Generated garbage at every write route and every query string: never a 5xx, every rejection
  * names a field or line (or is an auth/conflict answer with a message), and a rejected request
- * leaves every table byte-for-byte as it was. Runs per property: PROPERTY_RUNS (default 60; raise it for a deeper run).
+ * leaves every table byte-for-byte as it was. Runs per property: PROPERTY_RUNS (default 60; raise it
+ * for a deeper run — the timeout grows with it).
  */
 const RUNS = Number(process.env.PROPERTY_RUNS ?? 60);
+const TIMEOUT = Math.max(30_000, RUNS * 60);
 const TABLES = ['user', 'library_entry', 'submission', 'audit_log', 'mail_message', 'password_reset', 'refresh_token'];
 
 async function fingerprint(s: TestServer): Promise<string> {
@@ -104,7 +106,7 @@ describe('property: generated input at every write route', () => {
         }),
         { numRuns: RUNS },
       );
-    });
+    }, TIMEOUT);
   }
 
   it('when the body is not JSON at all, then every write route answers 4xx naming the body', async () => {
@@ -123,7 +125,7 @@ describe('property: generated input at every write route', () => {
       }),
       { numRuns: RUNS },
     );
-  });
+  }, TIMEOUT);
 
   const getRoutes: { url: string; role: string }[] = [
     { url: '/api/review/queue', role: 'curator' },
@@ -143,7 +145,7 @@ describe('property: generated input at every write route', () => {
       }),
       { numRuns: RUNS * 2 },
     );
-  });
+  }, TIMEOUT);
 
   // Upload material: random bytes, truncated peak lists and JCAMP-DX, huge numbers, other encodings.
   const csv = 'shift,intensity\n1.22,3\n3.69,2\n2.10,1\n';
@@ -179,5 +181,5 @@ describe('property: generated input at every write route', () => {
       }),
       { numRuns: RUNS * 2 },
     );
-  });
+  }, TIMEOUT);
 });

@@ -124,6 +124,49 @@ describe('fitMixture', () => {
     const alone = fitMixture(synthPeaks([{ entry: e, amount: 2 }]), [e]).components[0];
     expect(alone.distinctLines).toBe(alone.resolvedLines);
   }, T);
+  describe('an own line (ownLineRequired)', () => {
+    // Ethanol (Gottlieb 1997 Table 1, CDCl3: 1.25 t, 3.72 q) as a picked list whose quartet came out
+    // 30 % too tall (merged lines and baseline picked with it: the misfit a real list has), and an
+    // invented "shadow" entry that is ethanol's quartet alone: all its lines sit on ethanol's.
+    const e = get('ethanol');
+    const quartet = e.signals.find((sg) => sg.nucleus === '1H' && sg.multiplicity === 'q')!;
+    const shadow = { ...e, id: 'shadow', name: 'shadow', signals: [quartet] };
+    const misfit = (mix: Mixture): Mixture => (mix.kind === 'peaks' ? { ...mix, peaks: mix.peaks.map((p) => (Math.abs(p.shift - quartet.shift) < 0.05 ? { ...p, intensity: 1.3 * p.intensity } : p)) } : mix);
+    const list = misfit(synthPeaks([{ entry: e, amount: 2 }]));
+
+    it('on a peak list, rejects a candidate whose every supported line lies on another compound’s lines, and refits', () => {
+      const loose = fitMixture(list, [e, shadow], { ownLineRequired: false });
+      expect(loose.components.find((c) => c.entryId === 'shadow')?.amountPerNucleus ?? 0).toBeGreaterThan(0.1);
+      const r = fitMixture(list, [e, shadow]);
+      expect(r.components.map((c) => c.entryId)).toEqual(['ethanol']);
+      const why = r.rejected.find((x) => x.entryId === 'shadow')!;
+      expect(why.reason).toBe('no-own-line');
+      expect(why.message).toMatch(/no evidence of its own \(it may still be present, hidden under them\)$/);
+      expect(why.share).toBeGreaterThan(0);
+      expect(FitResultSchema.safeParse(r).success).toBe(true);
+    }, T);
+
+    it('keeps a candidate whose lines are shared only with a fitted look-alike (the pair is reported as one set)', () => {
+      const r = fitMixture(list, [e, shadow], { lookAlikes: [['ethanol', 'shadow']] });
+      expect(r.components.map((c) => c.entryId).sort()).toEqual(['ethanol', 'shadow']);
+    }, T);
+
+    it('keeps a candidate with one line of its own beside shared ones', () => {
+      const withOwn = { ...shadow, id: 'own', name: 'own', signals: [quartet, { nucleus: '1H' as const, shift: 6.4, multiplicity: 's', j: [], nuclei: 1 }] };
+      const mix = misfit(synthPeaks([{ entry: e, amount: 2 }, { entry: withOwn, amount: 0.5 }]));
+      const r = fitMixture(mix, [e, withOwn]);
+      expect(r.components.map((c) => c.entryId).sort()).toEqual(['ethanol', 'own']);
+    }, T);
+
+    it('is off by default for a spectrum, where intensity beyond another compound’s pattern is evidence', () => {
+      const spec = synthSpectrum([{ entry: e, amount: 2 }, { entry: shadow, amount: 0.6 }], { points: 8192 });
+      const r = fitMixture(spec, [e, shadow], { linewidthHz: 1 });
+      const c = r.components.find((x) => x.entryId === 'shadow');
+      expect(c).toBeDefined();
+      expect(Math.abs(c!.amountPerNucleus - 0.6) / 0.6).toBeLessThan(0.05);
+      expect(c!.distinctLines).toBe(0);
+    }, T);
+  });
   it('lists a mixture peak no candidate explains', () => {
     const mix = synthSpectrum([...parts, { entry: get('benzene'), amount: 0.3 }], { points: 8192 });
     const r = fitMixture(mix, lib.filter((e) => e.id !== 'benzene'), { linewidthHz: 1 });
