@@ -37,6 +37,20 @@ interface Prepared {
   axis: Float64Array;
   y: Float64Array;
   reversed: boolean;
+  /** RMS noise of y (intensityNoiseLevel), measured once. */
+  noise: number;
+}
+
+/**
+ * The checked ascending axis and its noise, per spectrum object: an analysis fits the same
+ * spectrum once for the library and once per decoy library. The engine never changes a mixture
+ * it is given, so the object is the key (a changed spectrum is a new object).
+ */
+const preparedSpectra = new WeakMap<object, Prepared>();
+function prepareSpectrumOnce(mixture: Extract<Mixture, { kind: 'spectrum' }>): Prepared {
+  let p = preparedSpectra.get(mixture);
+  if (!p) preparedSpectra.set(mixture, (p = prepareSpectrum(mixture.ppm, mixture.intensity)));
+  return p;
 }
 
 function prepareSpectrum(ppm: number[], intensity: number[]): Prepared {
@@ -49,7 +63,7 @@ function prepareSpectrum(ppm: number[], intensity: number[]): Prepared {
     if (!Number.isFinite(axis[i]) || !Number.isFinite(y[i])) throw new RangeError(`mixture point ${reversed ? n - 1 - i : i} is not a finite number`);
     if (i > 0 && !(axis[i] > axis[i - 1])) throw new RangeError(`mixture ppm axis must be strictly monotonic (at point ${reversed ? n - 1 - i : i})`);
   }
-  return { axis, y, reversed };
+  return { axis, y, reversed, noise: intensityNoiseLevel(y) };
 }
 
 /**
@@ -112,9 +126,9 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
   let prepared: Prepared | null = null;
   let noise: number | null = parsed.data.noiseLevel ?? null;
   if (mixture.kind === 'spectrum') {
-    prepared = prepareSpectrum(mixture.ppm, mixture.intensity);
+    prepared = prepareSpectrumOnce(mixture);
     design = fitDesignSpectrum(prepared.axis, prepared.y, cutoff);
-    if (noise === null) noise = intensityNoiseLevel(prepared.y);
+    if (noise === null) noise = prepared.noise;
   } else {
     const peaks = mixture.peaks.map((p, i) => {
       if (!Number.isFinite(p.shift) || !Number.isFinite(p.intensity) || p.intensity < 0) throw new RangeError(`mixture peak ${i + 1} needs a finite shift and a non-negative intensity`);

@@ -2,7 +2,21 @@ import type { Mixture } from '../../shared/mixture';
 import { DEFAULT_TOLERANCE_PPM } from '../../shared/nucleus';
 import type { ExcludedPeak, UsedPeak } from '../../shared/screening';
 import { solventExclusionRegions } from '../solvent/solventExclusionRegions';
-import { spectrumPickPeaks } from '../spectrum/spectrumPickPeaks';
+import { spectrumPickPeaks, type PickPeaksResult } from '../spectrum/spectrumPickPeaks';
+
+/**
+ * Picked peaks per spectrum object and S/N threshold. An analysis screens the same spectrum once
+ * for the library and once per decoy library; picking is the same every time. The engine never
+ * changes a mixture it is given, so the object is the key (a changed spectrum is a new object).
+ */
+const picked = new WeakMap<object, Map<number, PickPeaksResult>>();
+function pickOnce(mixture: Extract<Mixture, { kind: 'spectrum' }>, snrThreshold: number): PickPeaksResult {
+  let bySnr = picked.get(mixture);
+  if (!bySnr) picked.set(mixture, (bySnr = new Map()));
+  let r = bySnr.get(snrThreshold);
+  if (!r) bySnr.set(snrThreshold, (r = spectrumPickPeaks(mixture, { snrThreshold })));
+  return r;
+}
 
 export interface MixturePeaksOptions {
   /** Window half-width, ppm, also used around solvent signals and the reference. Default DEFAULT_TOLERANCE_PPM[nucleus]. */
@@ -60,14 +74,14 @@ export function mixturePeaks(mixture: Mixture, options: MixturePeaksOptions = {}
       raw.push({ sourceIndex: i, shift: p.shift, intensity, widthHz: p.widthHz, snr: null });
     });
   } else {
-    const picked = spectrumPickPeaks(mixture, { snrThreshold });
-    noise = picked.noise;
-    picked.peaks.forEach((p, i) =>
+    const pick = pickOnce(mixture, snrThreshold);
+    noise = pick.noise;
+    pick.peaks.forEach((p, i) =>
       raw.push({ sourceIndex: i, shift: p.shift, intensity: Math.max(p.integral, 0), widthHz: p.widthHz, snr: p.snr, integral: p.integral }),
     );
-    picked.belowThreshold.forEach((p, i) =>
+    pick.belowThreshold.forEach((p, i) =>
       excluded.push({
-        sourceIndex: picked.peaks.length + i,
+        sourceIndex: pick.peaks.length + i,
         shift: p.shift,
         intensity: p.height,
         snr: p.snr,

@@ -110,9 +110,9 @@ export async function run(): Promise<void> {
   for (const v of y) top = Math.max(top, v);
   for (let i = 0; i < POINTS; i++) y[i] += 0.002 * top * (random() + random() + random() - 1.5);
   const spectrum: Mixture = { kind: 'spectrum', name: 'bench', nucleus: '1H', solvent: 'CDCl3', mhz: MHZ, reference: 'TMS', ppm: Array.from(axis), intensity: Array.from(y) };
-  // Same problem for both: fixed positions, no share or detection rejection (plain NNLS).
+  // Same problem for both: fixed positions, no share, detection or own-line rejection (plain NNLS).
   const cutoff = process.env.BENCH_CUTOFF ? Number(process.env.BENCH_CUTOFF) : undefined;
-  const plain = { linewidthHz: FWHM_HZ, refineShifts: false, minShare: 0, noiseLevel: 1e-300, cutoff };
+  const plain = { linewidthHz: FWHM_HZ, refineShifts: false, minShare: 0, noiseLevel: 1e-300, ownLineRequired: false, cutoff };
 
   console.log(`overlay fit bench: ${CANDIDATES} candidates (${present.length} present), ${POINTS}-point spectrum, ${RUNS} runs each, median`);
   const { a: ours, b: dense } = timedPair(() => fitMixture(spectrum, entries, plain), () => denseFit(entries, axis, y));

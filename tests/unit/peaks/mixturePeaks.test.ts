@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { mixturePeaks } from '../../../matching/peaks';
-import type { PeakListMixture } from '../../../shared/mixture';
+import type { PeakListMixture, SpectrumMixture } from '../../../shared/mixture';
 
 const m: PeakListMixture = {
   kind: 'peaks',
@@ -42,5 +42,18 @@ describe('mixturePeaks', () => {
 
   it('rejects a non-positive tolerance', () => {
     expect(() => mixturePeaks(m, { tolerancePpm: 0 })).toThrow('tolerancePpm must be positive, got 0');
+  });
+
+  it('picks a spectrum once per object and S/N threshold, and a changed spectrum (a new object) afresh', () => {
+    // One Lorentzian line (FWHM 1 Hz at 400 MHz) at 2.17 ppm with a little deterministic ripple.
+    const ppm = Array.from({ length: 2048 }, (_, i) => 3 - i / 1024);
+    const line = (at: number) => ppm.map((x, i) => 100 / (1 + ((x - at) / (0.5 / 400)) ** 2) + 0.1 * Math.sin(i * 1.7));
+    const s: SpectrumMixture = { kind: 'spectrum', name: 's', nucleus: '1H', solvent: 'CDCl3', mhz: 400, reference: 'none', ppm, intensity: line(2.17) };
+    const first = mixturePeaks(s);
+    expect(first.used.map((p) => p.shift.toFixed(2))).toEqual(['2.17']);
+    expect(mixturePeaks(s)).toEqual(first);
+    expect(mixturePeaks(s, { snrThreshold: 1e6 }).used).toEqual([]);
+    const moved = { ...s, intensity: line(2.5) };
+    expect(mixturePeaks(moved).used.map((p) => p.shift.toFixed(2))).toEqual(['2.50']);
   });
 });
