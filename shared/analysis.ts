@@ -17,12 +17,21 @@ export const FitOptionsSchema = z.object({
   ownLineRequired: z.boolean().optional().describe('reject a candidate with no supported line at least a linewidth from every other fitted line (default: true for peak lists, false for spectra — a picked list keeps no line shapes, so intensity under another compound\'s line is no evidence there)'),
   lookAlikes: z.array(z.array(z.string())).optional().describe('sets of entry ids said to be alike (near duplicates, screening ambiguity groups): a member sharing its lines with a fitted member of its set is kept and reported with it, not rejected for want of an own line'),
   curves: z.boolean().optional().describe('return the axis and curves (default true; false leaves them empty, e.g. for decoy fits)'),
+  componentCurves: z.boolean().optional().describe('with curves, also return each component’s contribution curve on the axis (default true; false leaves FitComponent.curve empty — FitComponent.lines gives the same curve through fittedLinesCurve, without storing one number per point per compound)'),
   includeExchangeable: z.boolean().optional().describe('simulate OH/NH signals marked exchangeable too (default false: their position and width vary)'),
 });
 export type FitOptions = z.infer<typeof FitOptionsSchema>;
 
 export const RejectionReasonSchema = z.enum(['zero-amount', 'below-share', 'below-detection', 'missing-signals', 'no-own-line', 'no-lines']);
 export type RejectionReason = z.infer<typeof RejectionReasonSchema>;
+
+/** One fitted Lorentzian line of a component: its contribution is area · (w/2π) / ((δ − shift)² + (w/2)²). */
+export const FittedLineSchema = z.object({
+  shift: finite.describe('line centre with the component’s shift offset, ppm'),
+  area: finite.nonnegative().describe('fitted area of the line, mixture intensity × ppm'),
+  widthPpm: finite.positive().describe('full width at half height, ppm'),
+});
+export type FittedLine = z.infer<typeof FittedLineSchema>;
 
 /** One candidate kept by the fit. Amounts are per nucleus, so they compare as mole ratios. */
 export const FitComponentSchema = z.object({
@@ -41,7 +50,8 @@ export const FitComponentSchema = z.object({
   snr: finite.nonnegative().nullable().describe('height of its tallest fitted line / RMS noise; null when the noise is unknown'),
   belowQuantitationLimit: z.boolean().describe('true when snr < 10 (ICH Q2(R1) quantitation limit, common practice)'),
   identifiable: z.boolean().optional().describe('false when the compound is in an AnalysisReport.indistinguishable set: this data fixes only the set’s combined amount, not this compound’s own; absent from a bare fit'),
-  curve: z.array(finite).describe('contribution on FitResult.axis'),
+  lines: z.array(FittedLineSchema).optional().describe('its fitted lines (absent from reports stored before they were added): the contribution curve, exactly, at any resolution'),
+  curve: z.array(finite).describe('contribution on FitResult.axis; empty when the fit was asked for no component curves'),
 });
 export type FitComponent = z.infer<typeof FitComponentSchema>;
 

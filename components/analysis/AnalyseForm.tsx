@@ -13,6 +13,8 @@ import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { pickTextFiles, type PickedFile } from '../pickTextFiles';
 import { DEMO_MIXTURES, demoMixtureContent } from '../demoMixtures';
+// The header reader only (no engine): keep `matching/io/index` out of the first download.
+import { mixtureFileStates } from '../../matching/io/mixtureFileStates';
 
 type Source = 'paste' | 'file' | 'demo';
 
@@ -45,6 +47,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
   const [stdConc, setStdConc] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [pickError, setPickError] = useState<string | null>(null);
+  const [fileNote, setFileNote] = useState<string | null>(null);
   const [loadingDemo, setLoadingDemo] = useState(false);
 
   const standards = useMemo(() => library.filter((e) => e.category === 'reference' && e.solvent === solvent), [library, solvent]);
@@ -67,7 +70,27 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
     setPickError(null);
     try {
       const [f] = await pickTextFiles(false);
-      if (f) setFile(f);
+      if (!f) return;
+      setFile(f);
+      // What the file states about itself fills the settings below (a 600 MHz spectrum read at
+      // the form's 400 MHz would place every coupled line wrongly); the user can still change them.
+      const stated = mixtureFileStates(f.name, f.content);
+      const said: string[] = [];
+      if (stated.nucleus) {
+        setNucleus(stated.nucleus);
+        setTol(String(DEFAULT_TOLERANCE_PPM[stated.nucleus]));
+        said.push(stated.nucleus);
+      }
+      if (stated.solvent && stated.solvent !== 'other') {
+        setSolvent(stated.solvent);
+        said.push(stated.solvent);
+      }
+      if (stated.mhz && stated.mhz >= SPECTROMETER_MHZ_RANGE[0] && stated.mhz <= SPECTROMETER_MHZ_RANGE[1]) {
+        const shown = String(Number(stated.mhz.toPrecision(6)));
+        setMhz(shown);
+        said.push(`${shown} MHz`);
+      }
+      setFileNote(said.length ? `Read from the file: ${said.join(', ')}. Change the settings below if the file is wrong.` : 'The file does not state its solvent or frequency: check the settings below.');
     } catch (err) {
       setPickError(err instanceof Error ? err.message : 'The file could not be read.');
     }
@@ -132,6 +155,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
             {file ? `${file.name} (${file.content.length.toLocaleString()} characters)` : 'Peak list (.csv .tsv .txt) or spectrum (.csv, JCAMP-DX .jdx .dx)'}
           </Text>
           {file ? <TextField label="Sample name" value={name} onChangeText={setName} placeholder={file.name.replace(/\.[^.]*$/, '')} /> : null}
+          {file && fileNote ? <Notice tone="info" label="Settings from the file" text={fileNote} /> : null}
           {errors.file ? <Notice tone="danger" text={errors.file} /> : null}
           {pickError ? <Notice tone="danger" text={pickError} /> : null}
         </View>

@@ -4,6 +4,7 @@ import { useRouter } from 'expo-router';
 import type { StoredAnalysis } from '../../localdb/analyses';
 import { COMPONENT_COLOUR_KEYS } from '../../constants/theme';
 import { analysisRows } from '../../client/analysisRows';
+import { fittedLinesCurve } from '../../client/fittedLinesCurve';
 import { analysisToCsv, analysisToJson, exportFileName } from '../../client/analysisExport';
 import { useTheme } from '../../hooks/useTheme';
 import { CautionBanner } from '../CautionBanner';
@@ -32,7 +33,10 @@ export function ResultView({ analysis }: { analysis: StoredAnalysis }) {
       { key: 'mix', label: analysis.mixture.kind === 'spectrum' ? 'mixture' : 'mixture (peak list as lines)', colour: 'plotMixture', x: fit.axis, y: fit.mixtureCurve, width: 1.4 },
       { key: 'sum', label: 'fitted sum', colour: 'plotFit', x: fit.axis, y: fit.fittedSum, dashed: true },
     ];
-    fit.components.forEach((c, i) => out.push({ key: `c-${c.entryId}`, label: c.name, colour: COMPONENT_COLOUR_KEYS[i % COMPONENT_COLOUR_KEYS.length], x: fit.axis, y: c.curve, width: 1 }));
+    // Analyses stored before fitted lines were kept carry their curves; newer ones carry the lines.
+    fit.components.forEach((c, i) =>
+      out.push({ key: `c-${c.entryId}`, label: c.name, colour: COMPONENT_COLOUR_KEYS[i % COMPONENT_COLOUR_KEYS.length], x: fit.axis, y: c.curve.length > 0 || !c.lines ? c.curve : fittedLinesCurve(c.lines, fit.axis), width: 1 }),
+    );
     out.push({ key: 'res', label: 'residual', colour: 'plotResidual', x: fit.axis, y: fit.residual, width: 1 });
     return out;
   }, [analysis, fit]);

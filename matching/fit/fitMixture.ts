@@ -87,6 +87,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     unexplainedFraction = 0.5,
     includeExchangeable = false,
     curves: withCurves = true,
+    componentCurves = true,
     minCoverage = 0,
     ownLineRequired = mixture.kind === 'peaks',
     lookAlikes = [],
@@ -377,7 +378,8 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
       distinctLines: ev.distinctLines,
       snr,
       belowQuantitationLimit: snr !== null && snr < QUANTITATION_SNR,
-      curve: withCurves ? toPlainArray(own, reversed) : [],
+      lines: current[i].map((l) => ({ shift: l.x, area: c[a] * l.a, widthPpm: l.w })),
+      curve: withCurves && componentCurves ? toPlainArray(own, reversed) : [],
     };
   });
 

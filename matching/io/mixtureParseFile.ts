@@ -1,5 +1,6 @@
 import type { Mixture } from '../../shared/mixture';
 import { InputError } from './InputError';
+import { fileNameParts, isJcampFile } from './fileNameParts';
 import type { MixtureMeta } from './mixtureMetaParse';
 import { peakListParseText } from './peakListParseText';
 import { spectrumParseCsv } from './spectrumParseCsv';
@@ -7,7 +8,6 @@ import { spectrumParseJcamp } from './spectrumParseJcamp';
 import { textTableNumber } from './textTableNumber';
 import { textTableRead } from './textTableRead';
 
-const JCAMP_EXT = new Set(['jdx', 'dx', 'jcamp', 'jcm']);
 const TEXT_EXT = new Set(['csv', 'tsv', 'txt', 'tab', 'dat', '']);
 /** A table longer than this with a monotonic first column is read as a spectrum (peak lists are shorter). */
 const SPECTRUM_MIN_POINTS = 1000;
@@ -19,11 +19,9 @@ const SPECTRUM_MIN_POINTS = 1000;
  */
 export function mixtureParseFile(fileName: string, content: string, meta: MixtureMeta = {}): Mixture {
   if (typeof content !== 'string') throw new TypeError('file content must be a string');
-  const base = fileName.split(/[\\/]/).pop() ?? fileName;
-  const dot = base.lastIndexOf('.');
-  const ext = dot > 0 ? base.slice(dot + 1).toLowerCase() : '';
+  const { base, ext } = fileNameParts(fileName);
   const withName = { name: base.replace(/\.[^.]*$/, '') || 'mixture', ...meta };
-  if (content.trimStart().startsWith('##') || JCAMP_EXT.has(ext)) return spectrumParseJcamp(content, withName);
+  if (isJcampFile(ext, content)) return spectrumParseJcamp(content, withName);
   if (!TEXT_EXT.has(ext)) {
     throw new InputError(base, [{ field: 'file', message: `unsupported file type ".${ext}" (use .csv, .tsv, .txt, .jdx or .dx)` }]);
   }

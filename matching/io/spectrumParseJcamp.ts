@@ -1,21 +1,9 @@
 import { convert } from 'jcampconverter';
 import { SpectrumMixtureSchema, type SpectrumMixture } from '../../shared/mixture';
 import type { Nucleus } from '../../shared/nucleus';
-import type { Solvent } from '../../shared/solvent';
 import { InputError } from './InputError';
+import { JCAMP_SOLVENT_NAMES, XI_13C } from './jcampHeaderMeta';
 import { mixtureMetaParse, type MixtureMeta } from './mixtureMetaParse';
-
-const XI_13C = 0.2514502; // Ξ(13C)/100, Harris et al. 2001
-
-const SOLVENT_NAMES: Array<[RegExp, Solvent]> = [
-  [/^(cdcl3|chloroform(-d)?)$/i, 'CDCl3'],
-  [/^(acetone(-d6)?|\(cd3\)2co)$/i, 'acetone-d6'],
-  [/^(dmso(-d6)?|\(cd3\)2so)$/i, 'DMSO-d6'],
-  [/^(c6d6|benzene(-d6)?)$/i, 'C6D6'],
-  [/^(cd3cn|acetonitrile(-d3)?)$/i, 'CD3CN'],
-  [/^(cd3od|methanol(-d4)?|meod)$/i, 'CD3OD'],
-  [/^(d2o|h2o\+d2o|water)$/i, 'D2O'],
-];
 
 function text(v: unknown): string | undefined {
   if (v === undefined || v === null) return undefined;
@@ -70,7 +58,7 @@ export function spectrumParseJcamp(jcamp: string, meta: MixtureMeta = {}): Spect
     toPpm = (v) => v / observe;
   } else throw new InputError('JCAMP-DX', [{ field: 'XUNITS', message: `X units "${xUnits}" are not supported (PPM or HZ)` }]);
   const solventText = text(info['.SOLVENTNAME']);
-  const solvent = m.solvent ?? SOLVENT_NAMES.find(([re]) => solventText !== undefined && re.test(solventText))?.[1] ?? 'other';
+  const solvent = m.solvent ?? JCAMP_SOLVENT_NAMES.find(([re]) => solventText !== undefined && re.test(solventText))?.[1] ?? 'other';
   const refText = text(userLabels['TESSERA REFERENCE']);
   const reference = m.reference ?? (refText === 'TMS' || refText === 'DSS' || refText === 'TSP' || refText === 'none' ? refText : undefined);
   const demo = m.demo ?? (text(userLabels['TESSERA DEMO']) === 'true' ? true : undefined);

@@ -1,7 +1,6 @@
 import type { SpectrumMixture } from '../../shared/mixture';
 
-/** Ξ(13C)/100 on the unified scale (Harris et al., Pure Appl. Chem. 2001, 73, 1795). */
-const XI_13C = 0.2514502;
+import { XI_13C } from './jcampHeaderMeta';
 
 function num(v: number, digits = 10): string {
   return Number(v.toPrecision(digits)).toString();

@@ -213,7 +213,7 @@ describe('analyse a demo mixture', () => {
     }
   });
 
-  it('when the analyst chooses a JCAMP-DX spectrum file and runs a batch of demo peak lists, then both give results', async () => {
+  it('when the analyst chooses a JCAMP-DX spectrum file, then its own solvent and frequency replace the settings and it and a batch of demo peak lists give results', async () => {
     // The honey sample's simulated spectrum (400 MHz); the app's job here is the file path, the
     // engine's demo tests cover the harder spectra.
     const m = demoManifest().mixtures.find((x) => x.id === 'demo-01-honey-WV-H-0412' && x.files.spectrum)!;
@@ -223,16 +223,22 @@ describe('analyse a demo mixture', () => {
       await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
       await page.goto(`${server.url}/analyse`);
       await page.getByLabel('Mixture from: a file').click();
+      // Settings that disagree with the file: choosing it must replace them with what it states
+      // (.SOLVENT NAME and .OBSERVE FREQUENCY in its JCAMP-DX header).
+      await page.getByLabel('Solvent: CDCl3').click();
+      await page.getByLabel('Spectrometer (MHz)').fill('80');
       const chooser = page.waitForEvent('filechooser');
       await page.getByRole('button', { name: 'Choose a mixture file' }).click();
       await (await chooser).setFiles(path.join(DEMO_DIR, m.files.spectrum!));
       await expect.poll(() => page.getByLabel('Chosen file').innerText(), { timeout: 10_000 }).toContain(m.files.spectrum!);
-      await page.getByLabel(`Solvent: ${m.solvent}`).click();
-      await page.getByLabel('Spectrometer (MHz)').fill(String(m.mhz));
+      expect(await page.getByLabel('Settings from the file').innerText()).toContain(`Read from the file: 1H, ${m.solvent}, ${m.mhz} MHz.`);
+      expect(await page.getByLabel('Spectrometer (MHz)').inputValue()).toBe(String(m.mhz));
       await page.getByRole('button', { name: 'Run analysis' }).click();
       await page.getByLabel('Candidates').first().waitFor({ timeout: 90_000 });
       const analytes = (m.components as Array<{ name: string; role: string }>).filter((c) => c.role === 'analyte');
       for (const a of analytes) expect(await page.getByLabel(`Candidate ${a.name}`, { exact: true }).innerText()).toContain('confirmed by fit');
+      // The run used the file's solvent and frequency, not the settings typed before choosing it.
+      expect(await page.getByText(/^1H · .* MHz · tolerance/).innerText()).toContain(`1H · ${m.solvent} · ${m.mhz} MHz`);
       await screenshot(page, 'result-spectrum-wide');
 
       const d2o = demoManifest().mixtures.filter((x) => x.solvent === 'D2O' && x.files.peaks);
