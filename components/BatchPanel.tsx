@@ -4,6 +4,8 @@ import { Link } from 'expo-router';
 import { SolventSchema, type Solvent } from '../shared/solvent';
 import { DEFAULT_TOLERANCE_PPM } from '../shared/nucleus';
 import { SPECTROMETER_MHZ_RANGE } from '../shared/spectrometer';
+// The header reader only (no engine): keep `matching/io/index` out of the first download.
+import { mixtureFileStates } from '../matching/io/mixtureFileStates';
 import { useRunBatchMutation } from '../queries/analyses';
 import { batchSummary, batchToCsv } from '../client/batchSummary';
 import { describeError } from '../client/describeError';
@@ -66,17 +68,30 @@ export function BatchPanel() {
 
   const mhzNumber = mhz.trim() === '' ? NaN : Number(mhz.replace(',', '.'));
   const mhzOk = mhzNumber >= SPECTROMETER_MHZ_RANGE[0] && mhzNumber <= SPECTROMETER_MHZ_RANGE[1];
+  const [ownSettings, setOwnSettings] = useState<string[]>([]);
   const run = () => {
     const m = mhzNumber;
+    const own: string[] = [];
     batch.mutate(
-      files.map((f) => ({
-        fileName: f.name,
-        content: f.content,
-        demo: f.demo,
-        name: f.title,
-        settings: { nucleus: '1H', solvent, mhz: m, tolerancePpm: DEFAULT_TOLERANCE_PPM['1H'], standard: null },
-      })),
+      files.map((f) => {
+        // What a file states about itself wins over the run's settings (a 600 MHz file read at
+        // 400 MHz, or a D2O sample screened against CDCl3 entries, would be analysed wrongly).
+        const stated = mixtureFileStates(f.name, f.content);
+        const nucleus = stated.nucleus ?? '1H';
+        const fileSolvent = stated.solvent && stated.solvent !== 'other' ? stated.solvent : solvent;
+        const fileMhz = stated.mhz && stated.mhz >= SPECTROMETER_MHZ_RANGE[0] && stated.mhz <= SPECTROMETER_MHZ_RANGE[1] ? stated.mhz : m;
+        const differs = [nucleus !== '1H' ? nucleus : null, fileSolvent !== solvent ? fileSolvent : null, fileMhz !== m ? `${Number(fileMhz.toPrecision(6))} MHz` : null].filter(Boolean);
+        if (differs.length) own.push(`${f.name} (${differs.join(', ')})`);
+        return {
+          fileName: f.name,
+          content: f.content,
+          demo: f.demo,
+          name: f.title,
+          settings: { nucleus, solvent: fileSolvent, mhz: fileMhz, tolerancePpm: DEFAULT_TOLERANCE_PPM[nucleus], standard: null },
+        };
+      }),
     );
+    setOwnSettings(own);
   };
 
   return (
@@ -90,12 +105,13 @@ export function BatchPanel() {
         />
       </View>
       <Text accessibilityLabel="Batch files" style={[styles.small, { color: t.colours.textMuted, fontFamily: t.fonts.regular }]}>
-        {files.length ? `${files.length} files: ${files.map((f) => f.name).join(', ')}` : 'No files chosen. Every file is read as a 1H mixture with the settings below.'}
+        {files.length ? `${files.length} files: ${files.map((f) => f.name).join(', ')}` : 'No files chosen. Every file is read as a 1H mixture with the settings below, except for what a file states about itself (JCAMP-DX header, "#" comments).'}
       </Text>
       <ChoiceRow label="Solvent of the run" value={solvent} onChange={(v) => setSolvent(v as Solvent)} options={SolventSchema.options.map((s) => ({ value: s, text: s }))} />
       <TextField label="Spectrometer (MHz)" keyboardType="decimal-pad" value={mhz} onChangeText={setMhz} error={mhzOk ? null : `Give the 1H frequency in MHz, between ${SPECTROMETER_MHZ_RANGE[0]} and ${SPECTROMETER_MHZ_RANGE[1]}.`} />
       <Button label="Run the batch" busy={batch.isPending} disabled={files.length === 0 || !mhzOk} onPress={run} />
       {batch.isPending ? <Notice text={`Analysed ${batch.done} of ${files.length}…`} /> : null}
+      {ownSettings.length ? <Notice tone="info" label="Files with their own settings" text={`Read with the settings they state: ${ownSettings.join('; ')}.`} /> : null}
       {summary ? (
         <>
           <CautionBanner />

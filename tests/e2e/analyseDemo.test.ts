@@ -246,11 +246,16 @@ describe('analyse a demo mixture', () => {
       await page.getByLabel('Solvent of the run: D2O').click();
       await page.getByRole('button', { name: 'Demo mixtures in this solvent' }).click();
       await expect.poll(() => page.getByLabel('Batch files').innerText()).toContain(`${d2o.length} files`);
+      // A run frequency the files contradict: each demo peak list states its own in "#" comments,
+      // and that one is used for it.
+      await page.getByLabel('Spectrometer (MHz)').fill('600');
       await page.getByRole('button', { name: 'Run the batch' }).click();
       const table = page.getByLabel('Batch summary');
       await table.waitFor({ timeout: 120_000 });
       const text = await table.innerText();
       for (const x of d2o) expect(text).toContain(x.name);
+      const own = await page.getByLabel('Files with their own settings').innerText();
+      for (const x of d2o) expect(own).toContain(`${x.files.peaks} (${x.mhz} MHz)`);
       await screenshot(page, 'batch-result-wide');
     } finally {
       await close();
