@@ -92,46 +92,30 @@ function accepted<T>(schema: { safeParse(v: unknown): { success: true; data: T }
 }
 
 describe('the engine on anything the schemas accept', () => {
+  /** Whatever passes the schemas is analysed, or refused as a whole; the report keeps its own schema. */
+  const analysesCleanly = (entries: unknown[], mix: unknown) => {
+    const library = entries.map((e) => accepted<LibraryEntry>(LibraryEntrySchema, e)).filter((e): e is LibraryEntry => e !== null);
+    const mixture = accepted<Mixture>(MixtureSchema, mix);
+    fc.pre(library.length > 0 && mixture !== null);
+    let report;
+    try {
+      report = analyseMixture(mixture!, library);
+    } catch (e) {
+      // Refusals about the input as a whole are answers too; anything else is a bug.
+      if (WHOLE_INPUT_REFUSALS.some((m) => m.test((e as Error).message))) return;
+      throw e;
+    }
+    // Every number finite, every share in [0, 1].
+    const check = AnalysisReportSchema.safeParse(report);
+    expect(check.success, check.success ? '' : JSON.stringify(check.error.issues.slice(0, 3))).toBe(true);
+  };
+
   it('when entries and a peak-list mixture pass their schemas, then screening and the fit return a result', () => {
-    fc.assert(
-      fc.property(fc.tuple(entryInput(0), entryInput(1), entryInput(2)), mixtureInput, (entries, mix) => {
-        const library = entries.map((e) => accepted<LibraryEntry>(LibraryEntrySchema, e)).filter((e): e is LibraryEntry => e !== null);
-        const mixture = accepted<Mixture>(MixtureSchema, mix);
-        fc.pre(library.length > 0 && mixture !== null);
-        let report;
-        try {
-          report = analyseMixture(mixture!, library);
-        } catch (e) {
-          // Refusals about the input as a whole are answers too; anything else is a bug.
-          if (WHOLE_INPUT_REFUSALS.some((m) => m.test((e as Error).message))) return;
-          throw e;
-        }
-        // The report keeps its own schema: every number finite, every share in [0, 1].
-        const check = AnalysisReportSchema.safeParse(report);
-        expect(check.success, check.success ? '' : JSON.stringify(check.error.issues.slice(0, 3))).toBe(true);
-      }),
-      { numRuns: RUNS },
-    );
+    fc.assert(fc.property(fc.tuple(entryInput(0), entryInput(1), entryInput(2)), mixtureInput, analysesCleanly), { numRuns: RUNS });
   }, TIMEOUT);
 
   it('when entries and a spectrum pass their schemas, then peak picking, screening and the fit return a result', () => {
-    fc.assert(
-      fc.property(fc.tuple(entryInput(0), entryInput(1), entryInput(2)), spectrumInput, (entries, spec) => {
-        const library = entries.map((e) => accepted<LibraryEntry>(LibraryEntrySchema, e)).filter((e): e is LibraryEntry => e !== null);
-        const mixture = accepted<Mixture>(MixtureSchema, spec);
-        fc.pre(library.length > 0 && mixture !== null);
-        let report;
-        try {
-          report = analyseMixture(mixture!, library);
-        } catch (e) {
-          if (WHOLE_INPUT_REFUSALS.some((m) => m.test((e as Error).message))) return;
-          throw e;
-        }
-        const check = AnalysisReportSchema.safeParse(report);
-        expect(check.success, check.success ? '' : JSON.stringify(check.error.issues.slice(0, 3))).toBe(true);
-      }),
-      { numRuns: RUNS },
-    );
+    fc.assert(fc.property(fc.tuple(entryInput(0), entryInput(1), entryInput(2)), spectrumInput, analysesCleanly), { numRuns: RUNS });
   }, TIMEOUT);
 
   it("when an entry passes its schema, then its own simulated lines screen against the others (the curation check's path)", () => {
