@@ -1,5 +1,5 @@
 import type React from 'react';
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { SolventSchema, type Solvent } from '../../shared/solvent';
 import { DEFAULT_TOLERANCE_PPM, type Nucleus } from '../../shared/nucleus';
@@ -15,6 +15,7 @@ import { pickTextFiles, type PickedFile } from '../pickTextFiles';
 import { DEMO_MIXTURES, demoMixtureContent } from '../demoMixtures';
 // The header reader only (no engine): keep `matching/io/index` out of the first download.
 import { mixtureFileStates } from '../../matching/io/mixtureFileStates';
+import type { FileStatedMeta } from '../../matching/io/jcampHeaderMeta';
 
 type Source = 'paste' | 'file' | 'demo';
 
@@ -48,6 +49,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [pickError, setPickError] = useState<string | null>(null);
   const [fileNote, setFileNote] = useState<string | null>(null);
+  const [pasteNote, setPasteNote] = useState<string | null>(null);
   const [loadingDemo, setLoadingDemo] = useState(false);
 
   const standards = useMemo(() => library.filter((e) => e.category === 'reference' && e.solvent === solvent), [library, solvent]);
@@ -66,6 +68,39 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
     setStdConc(d.standard ? String(d.standard.concentrationMM) : '');
   };
 
+  /** Puts what a file or pasted text states about itself into the settings; returns what was set. */
+  const applyStated = (stated: FileStatedMeta): string[] => {
+    const said: string[] = [];
+    if (stated.nucleus) {
+      setNucleus(stated.nucleus);
+      setTol(String(DEFAULT_TOLERANCE_PPM[stated.nucleus]));
+      said.push(stated.nucleus);
+    }
+    if (stated.solvent && stated.solvent !== 'other') {
+      setSolvent(stated.solvent);
+      said.push(stated.solvent);
+    }
+    if (stated.mhz && stated.mhz >= SPECTROMETER_MHZ_RANGE[0] && stated.mhz <= SPECTROMETER_MHZ_RANGE[1]) {
+      const shown = String(Number(stated.mhz.toPrecision(6)));
+      setMhz(shown);
+      said.push(`${shown} MHz`);
+    }
+    return said;
+  };
+
+  // Pasted text with "# solvent D2O, 600 MHz" comments fills the settings when those comments
+  // change (not on every keystroke, so a setting changed by hand afterwards stays).
+  const pastedStated = useRef('{}');
+  const onPaste = (v: string) => {
+    setText(v);
+    const stated = mixtureFileStates('pasted.txt', v);
+    const key = JSON.stringify(stated);
+    if (key === pastedStated.current) return;
+    pastedStated.current = key;
+    const said = applyStated(stated);
+    setPasteNote(said.length ? `Read from the pasted text: ${said.join(', ')}. Change the settings below if it is wrong.` : null);
+  };
+
   const choose = async () => {
     setPickError(null);
     try {
@@ -74,22 +109,7 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
       setFile(f);
       // What the file states about itself fills the settings below (a 600 MHz spectrum read at
       // the form's 400 MHz would place every coupled line wrongly); the user can still change them.
-      const stated = mixtureFileStates(f.name, f.content);
-      const said: string[] = [];
-      if (stated.nucleus) {
-        setNucleus(stated.nucleus);
-        setTol(String(DEFAULT_TOLERANCE_PPM[stated.nucleus]));
-        said.push(stated.nucleus);
-      }
-      if (stated.solvent && stated.solvent !== 'other') {
-        setSolvent(stated.solvent);
-        said.push(stated.solvent);
-      }
-      if (stated.mhz && stated.mhz >= SPECTROMETER_MHZ_RANGE[0] && stated.mhz <= SPECTROMETER_MHZ_RANGE[1]) {
-        const shown = String(Number(stated.mhz.toPrecision(6)));
-        setMhz(shown);
-        said.push(`${shown} MHz`);
-      }
+      const said = applyStated(mixtureFileStates(f.name, f.content));
       setFileNote(said.length ? `Read from the file: ${said.join(', ')}. Change the settings below if the file is wrong.` : 'The file does not state its solvent or frequency: check the settings below.');
     } catch (err) {
       setPickError(err instanceof Error ? err.message : 'The file could not be read.');
@@ -141,11 +161,12 @@ export function AnalyseForm({ library, busy, onRun, status }: AnalyseFormProps) 
             multiline
             numberOfLines={6}
             value={text}
-            onChangeText={setText}
+            onChangeText={onPaste}
             placeholder={'shift, intensity[, width Hz] — one peak a line\n3.21, 100\n1.33, 45.5'}
             style={styles.area}
             error={errors.text}
           />
+          {pasteNote ? <Notice tone="info" label="Settings from the pasted text" text={pasteNote} /> : null}
         </>
       ) : null}
       {source === 'file' ? (

@@ -191,20 +191,23 @@ describe('analyse a demo mixture', () => {
     }
   });
 
-  it('when a pasted peak list has bad lines, then each is named and nothing is kept in the history', async () => {
+  it('when a pasted peak list states its settings and has bad lines, then the settings follow it, each bad line is named and nothing is kept in the history', async () => {
     const { page, close } = await openBrowser('phone');
     try {
       await signIn(page, server.url, 'student@demo.tessera.test');
       await page.getByLabel('Entries on this device').waitFor({ timeout: 30_000 });
       await page.goto(`${server.url}/analyse`);
-      await page.getByRole('textbox', { name: 'Peak list' }).fill('3.21, 100\n1.x3, 45\n4.11, -30');
+      // Its "#" comment states solvent and frequency: the settings take them.
+      await page.getByRole('textbox', { name: 'Peak list' }).fill('# solvent CDCl3, 80 MHz\n3.21, 100\n1.x3, 45\n4.11, -30');
+      expect(await page.getByLabel('Settings from the pasted text').innerText()).toContain('Read from the pasted text: CDCl3, 80 MHz.');
+      expect(await page.getByLabel('Spectrometer (MHz)').inputValue()).toBe('80');
       await page.getByRole('button', { name: 'Run analysis' }).click();
       const problems = page.getByLabel('Analysis problems');
       await problems.waitFor({ timeout: 30_000 });
       const text = await problems.innerText();
       expect(text).toContain('nothing was saved');
-      expect(text).toMatch(/Line 2/);
       expect(text).toMatch(/Line 3/);
+      expect(text).toMatch(/Line 4/);
       await screenshot(page, 'analyse-bad-input-phone');
       await page.goto(`${server.url}/history`);
       await page.getByText(/No analyses yet/).waitFor({ timeout: 10_000 });
