@@ -132,6 +132,22 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
       for (let i = 0; i < v.length; i++) target[o + i] += scale * v[i];
     }
   };
+  /** g(δ) = ⟨r(δ), R⟩ for each offset δ, with kernels cut at SEARCH_CUTOFF (search only). */
+  const profileOn = (lines: FitLine[], offsets: number[], R: Float64Array): Float64Array => {
+    const g = new Float64Array(offsets.length);
+    offsets.forEach((d, k) => {
+      let s = 0;
+      for (const l of lines) {
+        const r = lorentzianReach(l.w, SEARCH_CUTOFF);
+        const c = l.x + d;
+        const height = l.a * lorentzianUnitArea(0, l.w);
+        const hi = lowerBound(axis, c + r);
+        for (let i = lowerBound(axis, c - r); i < hi; i++) s += height * lorentzianFct(axis[i] - c, l.w) * R[i];
+      }
+      g[k] = s;
+    });
+    return g;
+  };
   // Asked for the same lines on every rejection pass: one sum per column.
   const intensityCache = new WeakMap<FitLine[], number>();
   return {
@@ -177,19 +193,8 @@ export function fitDesignSpectrum(axis: Float64Array, y: Float64Array, cutoff: n
         if (o.c === 0) continue;
         for (const seg of column(o.lines)) for (let i = 0; i < seg.values.length; i++) R[seg.start + i] -= o.c * seg.values[i];
       }
-      const g = new Float64Array(offsets.length);
-      offsets.forEach((d, k) => {
-        let s = 0;
-        for (const l of lines) {
-          const r = lorentzianReach(l.w, SEARCH_CUTOFF);
-          const c = l.x + d;
-          const height = l.a * lorentzianUnitArea(0, l.w);
-          const hi = lowerBound(axis, c + r);
-          for (let i = lowerBound(axis, c - r); i < hi; i++) s += height * lorentzianFct(axis[i] - c, l.w) * R[i];
-        }
-        g[k] = s;
-      });
-      return g;
+      return profileOn(lines, offsets, R);
     },
+    profileOn,
   };
 }

@@ -16,6 +16,8 @@ export interface FitDesign {
   dotLY(A: FitLine[]): number;
   /** g(δ) = ⟨r(δ), y − Σ c_k r_k⟩ for each offset δ (ppm), the others fixed; approximate (search only). */
   profile(lines: FitLine[], offsets: number[], others: { lines: FitLine[]; c: number }[]): Float64Array;
+  /** The same as profile against a residual R on the axis given directly (grid designs only: lets a search keep one residual up to date instead of rebuilding it). */
+  profileOn?(lines: FitLine[], offsets: number[], R: Float64Array): Float64Array;
   /** The mixture at shift x (interpolated on a grid, exact for a peak list). */
   mixtureAt(x: number): number;
   /** ⟨r_A, v⟩ for a vector v on the axis (spectrum designs only: there the axis is the data grid). */
