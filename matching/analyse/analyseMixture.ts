@@ -36,6 +36,8 @@ function screenAndFit(mixture: Mixture, entries: LibraryEntry[], options: Analys
   const fit = fitMixture(mixture, ids.map((id) => byId.get(id)!), {
     tolerancePpm: screen.tolerancePpm,
     lookAlikes,
+    // A named internal standard is fitted even when its signal is shared (a warning says so).
+    keepIds: forced,
     ...options.fit,
     ...(linewidthHz !== undefined ? { linewidthHz } : {}),
     ...(cutoff !== undefined && options.fit?.cutoff === undefined ? { cutoff } : {}),
@@ -96,6 +98,10 @@ export function analyseMixture(mixture: Mixture, library: LibraryEntry[], option
     }
   }
   if (fit.linewidthSource === 'default') warnings.push(`linewidth unknown: ${fit.linewidthHz} Hz assumed`);
+  const stdFit = standard ? fit.components.find((c) => c.entryId === standard.entryId) : undefined;
+  if (stdFit && stdFit.distinctLines === 0) {
+    warnings.push(`internal standard "${standard!.entryId}": none of its lines stands a linewidth clear of another fitted compound's lines, so its integral, and every concentration from it, rests on a shared signal`);
+  }
   // Look-alikes: library near duplicates and screening ambiguity groups, among the fitted.
   const fittedIds = new Set(fit.components.map((c) => c.entryId));
   const related: string[][] = screen.ambiguityGroups.map((g) => g.members);

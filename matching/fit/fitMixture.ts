@@ -91,6 +91,7 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     minCoverage = 0,
     ownLineRequired = mixture.kind === 'peaks',
     lookAlikes = [],
+    keepIds = [],
   } = parsed.data;
   const freq = nucleusFrequency(nucleus, mixture.mhz);
   const estimate = parsed.data.linewidthHz === undefined ? mixtureEstimateLinewidth(mixture) : null;
@@ -284,7 +285,9 @@ export function fitMixture(mixture: Mixture, candidates: LibraryEntry[], options
     if (ownLineRequired && active.length > 1) {
       let weakest = -1;
       let weakestAmount = Infinity;
+      const keep = new Set(keepIds);
       active.forEach((i, a) => {
+        if (keep.has(kept[i].entry.id)) return;
         const alike = lookAlikeOf.get(kept[i].entry.id);
         const ignore = new Set<number>();
         if (alike) active.forEach((k, b) => alike.has(kept[k].entry.id) && ignore.add(b));

@@ -137,6 +137,17 @@ describe('analyseMixture', () => {
     expect(r.amounts.find((a) => a.entryId === 'ethanol')!.concentrationMM).toBeCloseTo(8, 3);
   }, T);
 
+  it('fits a named internal standard whose only line sits on an analyte’s line, and warns that concentrations rest on a shared signal', () => {
+    // An invented standard: one 3H singlet on the centre line of ethanol's CH3 triplet (1.25 ppm,
+    // Gottlieb 1997 Table 1). In a picked list nothing tells its part of that peak from ethanol's.
+    const std: LibraryEntry = { id: 'demo.std-on-ethanol', name: 'demo standard', synonyms: [], formula: 'C2H6O', category: 'reference', source: 'invented for tests', solvent: 'CDCl3', mhz: 300, signals: [{ nucleus: '1H', shift: get('ethanol').signals.find((g) => g.nucleus === '1H' && g.multiplicity === 't')!.shift, multiplicity: 's', j: [], nuclei: 3 }] };
+    const r = analyseMixture(synthPeaks([...parts, { entry: std, amount: 0.3 }]), [...lib, std], { standard: { entryId: std.id, concentrationMM: 1 }, decoySets: 2 });
+    const fitted = r.fit.components.find((c) => c.entryId === std.id);
+    expect(fitted?.distinctLines).toBe(0);
+    expect(r.warnings).toContain(`internal standard "${std.id}": none of its lines stands a linewidth clear of another fitted compound's lines, so its integral, and every concentration from it, rests on a shared signal`);
+    expect(r.amounts.find((a) => a.entryId === 'ethanol')!.concentrationMM).not.toBeNull();
+  }, T);
+
   it('analyses a spectrum end to end', () => {
     const four = { ethanol: 2, 'ethyl-acetate': 1, acetone: 0.5, 'diethyl-ether': 0.8 };
     const mix = synthSpectrum(Object.entries(four).map(([id, amount]) => ({ entry: get(id), amount })), { noise: 0.01, points: 32768 });

@@ -151,6 +151,12 @@ describe('fitMixture', () => {
       expect(r.components.map((c) => c.entryId).sort()).toEqual(['ethanol', 'shadow']);
     }, T);
 
+    it('never rejects a candidate named in keepIds (a named internal standard)', () => {
+      const r = fitMixture(list, [e, shadow], { keepIds: ['shadow'] });
+      expect(r.components.map((c) => c.entryId).sort()).toEqual(['ethanol', 'shadow']);
+      expect(r.components.find((c) => c.entryId === 'shadow')!.distinctLines).toBe(0);
+    }, T);
+
     it('keeps a candidate with one line of its own beside shared ones', () => {
       const withOwn = { ...shadow, id: 'own', name: 'own', signals: [quartet, { nucleus: '1H' as const, shift: 6.4, multiplicity: 's', j: [], nuclei: 1 }] };
       const mix = misfit(synthPeaks([{ entry: e, amount: 2 }, { entry: withOwn, amount: 0.5 }]));
